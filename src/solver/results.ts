@@ -1,0 +1,125 @@
+/**
+ * What `solve(document)` returns. Figures are SI (amperes, volts, ohms, metres); every percentage
+ * carries its basis; every figure a user sees has a Working record behind it.
+ *
+ * This is the contract between the engine and its views (editor, CLI, exports). Add fields freely;
+ * renaming one means updating every view.
+ */
+import type { Id, Phase } from '../model/types.ts';
+
+export type Status = 'within' | 'close' | 'over';
+
+/** A percentage always says what it is a percentage of. */
+export interface Percent {
+  value: number;
+  /** U0 for single-phase and per-phase figures, ULL for balanced three-phase line-to-line figures. */
+  basis: 'U0' | 'ULL';
+  basisV: number;
+}
+
+export interface WorkingInput {
+  name: string;
+  value: number | string;
+  unit: string;
+  /** Where the value came from: a document field, a catalogue row, a limit profile, another result. */
+  source: string;
+}
+
+export interface Working {
+  /** Stable key, e.g. `ib`, `impedance`, `drop`, `cumulative`, `limit`, `headroom`. */
+  key: string;
+  title: string;
+  formula: string;
+  inputs: WorkingInput[];
+  result: { value: number | string; unit: string };
+  /** Where the method is simplified, it says so here. */
+  note?: string;
+}
+
+export type PhaseCurrents = Record<Phase | 'N', number>;
+
+export interface CableResult {
+  id: Id;
+  /** Design current Ib: the worst phase current. */
+  ibA: number;
+  /** Current magnitude on each conductor (0 where a conductor is absent). */
+  currentsA: PhaseCurrents;
+  /** The phase(s) this cable carries. */
+  phases: Phase[];
+  /** Per-metre resistance at conductor operating temperature and reactance, one conductor. */
+  rOhmPerM: number;
+  xOhmPerM: number;
+  /** Worst-phase drop along this segment, in volts and as a percentage. */
+  dropV: number;
+  dropPct: Percent;
+  /** Per-phase drop along this segment referred to U0 (line to neutral), volts. */
+  phaseDropV: Partial<Record<Phase, number>>;
+  /** Cumulative drop from the origin at the far end, worst phase, percent of U0. */
+  cumulativePct: Percent;
+  /** Longest this cable could be with the drop budget left on its worst downstream path, metres. */
+  maxLengthM: number | null;
+  status: Status | null;
+  working: Working[];
+}
+
+export interface NodeResult {
+  id: Id;
+  /** Voltage to neutral at the node per phase present. */
+  voltageV: Partial<Record<Phase, number>>;
+  /** Cumulative drop from the origin, worst phase, percent of U0. */
+  cumulativePct: Percent;
+  /** Demand current per phase flowing into the node. */
+  currentsA: PhaseCurrents;
+  status: Status | null;
+  working: Working[];
+}
+
+export interface PathShare {
+  cableId: Id;
+  dropPct: number;
+  /** Fraction of the load's total drop contributed by this segment (0..1). */
+  share: number;
+}
+
+export interface LoadResult extends NodeResult {
+  /** Cables from the origin to this load, in order. */
+  path: Id[];
+  limitPct: Percent;
+  /** Fraction of the budget used (cumulative / limit). */
+  budgetUsed: number;
+  shares: PathShare[];
+}
+
+export type Severity = 'error' | 'warning' | 'info';
+
+export interface Finding {
+  /** Stable code, e.g. `loop`, `island`, `fedTwice`, `phaseMismatch`, `badLength`, `overLimit`. */
+  code: string;
+  severity: Severity;
+  elementId?: Id;
+  message: string;
+}
+
+export interface DataSetInfo {
+  id: string;
+  title: string;
+  source: string;
+}
+
+export interface LimitProfileInfo {
+  id: string;
+  title: string;
+  source: string;
+}
+
+export interface Results {
+  cables: Record<Id, CableResult>;
+  /** Every node, loads included (a load's entry here is the same object as in `loads`). */
+  nodes: Record<Id, NodeResult>;
+  loads: Record<Id, LoadResult>;
+  findings: Finding[];
+  dataSet: DataSetInfo;
+  profile: LimitProfileInfo;
+  /** Standards and editions the figures rely on, for cautions and reports. */
+  references: string[];
+}

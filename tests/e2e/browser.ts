@@ -1,0 +1,59 @@
+import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+export const ARTIFACTS = join(process.cwd(), 'test-artifacts');
+
+const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+const ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--disable-dev-shm-usage',
+];
+
+export interface Session {
+  context: BrowserContext;
+  page: Page;
+  /** Console errors and page errors seen so far; tests assert this stays empty. */
+  errors: string[];
+  close(): Promise<void>;
+}
+
+/** A fresh Chromium profile (so IndexedDB starts empty) with a page whose errors are collected. */
+export async function openSession(viewport = { width: 1440, height: 900 }): Promise<Session> {
+  const dir = mkdtempSync(join(tmpdir(), 'dropline-e2e-'));
+  const context = await chromium.launchPersistentContext(dir, {
+    executablePath: CHROMIUM,
+    headless: true,
+    args: ARGS,
+    viewport,
+    acceptDownloads: true,
+  });
+  const page = context.pages()[0] ?? (await context.newPage());
+  const errors: string[] = [];
+  page.on('console', (msg) => {
+    if (msg.type() === 'error') errors.push(msg.text());
+  });
+  page.on('pageerror', (err) => errors.push(String(err)));
+  return {
+    context,
+    page,
+    errors,
+    async close() {
+      await context.close();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  mkdirSync(ARTIFACTS, { recursive: true });
+  await page.screenshot({ path: join(ARTIFACTS, `${name}.png`) });
+}
