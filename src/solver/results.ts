@@ -64,6 +64,8 @@ export interface CableResult {
 
 export interface NodeResult {
   id: Id;
+  /** Cables from the origin to this node, in order (empty for the supply or an unfed node). */
+  path: Id[];
   /** Voltage to neutral at the node per phase present. */
   voltageV: Partial<Record<Phase, number>>;
   /** Cumulative drop from the origin, worst phase, percent of U0. */
@@ -82,8 +84,6 @@ export interface PathShare {
 }
 
 export interface LoadResult extends NodeResult {
-  /** Cables from the origin to this load, in order. */
-  path: Id[];
   limitPct: Percent;
   /** Fraction of the budget used (cumulative / limit). */
   budgetUsed: number;
