@@ -1,0 +1,80 @@
+/**
+ * Every change a user can make to a project, as plain data from a closed union, and the pure
+ * function that applies one. The store records each applied command as one undo step; invariants
+ * (a deleted board takes its cables with it, a cable joins two existing nodes) live here, once.
+ *
+ * @example
+ *   const out = applyCommand(doc, { type: 'connectCable', from: 'B1', to: 'L3' });
+ *   if (out.ok) doc = out.doc; else show(out.error);
+ */
+import type { Cable, Id, NodeElement, Position, ProjectDetails, ProjectDocument, Settings } from './types.ts';
+import { addNode, moveNodes, updateNode, type NodePatch } from './commands/nodes.ts';
+import { connectCable, updateCable, type CablePatch } from './commands/cables.ts';
+import { deleteElements } from './commands/deleteElements.ts';
+import { pasteElements } from './commands/pasteElements.ts';
+import { applyProposals, type ProposedChange } from './commands/applyProposals.ts';
+import { replaceDocument, updateDetails, updateSettings } from './commands/project.ts';
+import { tidyLayout } from './commands/tidyLayout.ts';
+import type { CommandResult } from './commands/result.ts';
+
+export type { CommandResult };
+export { ok, fail } from './commands/result.ts';
+
+export type { NodePatch, CablePatch, ProposedChange };
+
+export type Command =
+  /** Adds a node; with `feedFrom`, also a cable from that node to the new one (one step). */
+  | { type: 'addNode'; node: NodeElement; feedFrom?: Id }
+  /** A cable from the upstream node `from` to the downstream node `to`, from the project's cable defaults. */
+  | { type: 'connectCable'; from: Id; to: Id; id?: Id; patch?: CablePatch }
+  | { type: 'moveNodes'; moves: { id: Id; position: Position }[] }
+  /** Removes nodes and cables; every cable touching a removed node goes too. */
+  | { type: 'deleteElements'; ids: Id[] }
+  | { type: 'updateNode'; id: Id; patch: NodePatch }
+  | { type: 'updateCable'; id: Id; patch: CablePatch }
+  | { type: 'updateDetails'; patch: Partial<ProjectDetails> }
+  | { type: 'updateSettings'; patch: Partial<Settings> }
+  /** Copies of elements (e.g. from the clipboard) get fresh ids and are placed `offset` away. */
+  | { type: 'pasteElements'; nodes: NodeElement[]; cables: Cable[]; offset: Position }
+  /** A layered layout from the supply down. */
+  | { type: 'tidyLayout' }
+  /** Accepted proposals from sizing or phase balancing, applied together as one step. */
+  | { type: 'applyProposals'; changes: ProposedChange[] }
+  | { type: 'replaceDocument'; doc: ProjectDocument };
+
+export type CommandType = Command['type'];
+
+/** Applies a command to a document without touching it; a refused command says why. */
+export function applyCommand(doc: ProjectDocument, command: Command): CommandResult {
+  switch (command.type) {
+    case 'addNode':
+      return addNode(doc, command.node, command.feedFrom);
+    case 'connectCable':
+      return connectCable(doc, command.from, command.to, command.id, command.patch);
+    case 'moveNodes':
+      return moveNodes(doc, command.moves);
+    case 'deleteElements':
+      return deleteElements(doc, command.ids);
+    case 'updateNode':
+      return updateNode(doc, command.id, command.patch);
+    case 'updateCable':
+      return updateCable(doc, command.id, command.patch);
+    case 'updateDetails':
+      return updateDetails(doc, command.patch);
+    case 'updateSettings':
+      return updateSettings(doc, command.patch);
+    case 'pasteElements':
+      return pasteElements(doc, command.nodes, command.cables, command.offset);
+    case 'tidyLayout':
+      return tidyLayout(doc);
+    case 'applyProposals':
+      return applyProposals(doc, command.changes);
+    case 'replaceDocument':
+      return replaceDocument(command.doc);
+  }
+}
+
+/** Dry run, so menus can grey out what would be refused. */
+export function canApply(doc: ProjectDocument, command: Command): boolean {
+  return applyCommand(doc, command).ok;
+}

@@ -1,0 +1,96 @@
+import type { Cable, Id, ProjectDocument } from '../types.ts';
+import { fail, ok, type CommandResult } from './result.ts';
+import { describeCable, describeNode } from './describe.ts';
+import { ID_PREFIX, nextId, usedIds } from './ids.ts';
+import { newCableFromDefaults } from './localDefaults.ts';
+
+export type CablePatch = Partial<Omit<Cable, 'id'>>;
+
+const CABLE_FIELDS: readonly string[] = [
+  'name',
+  'from',
+  'to',
+  'lengthM',
+  'material',
+  'insulation',
+  'construction',
+  'sizeMm2',
+  'cpc',
+  'phases',
+  'parallel',
+  'device',
+  'installation',
+];
+
+/** Why a cable from `from` to `to` cannot exist, or null when it can. */
+export function connectionProblem(doc: ProjectDocument, from: Id, to: Id, ignoreCable?: Id): string | null {
+  const up = doc.nodes.find((n) => n.id === from);
+  const down = doc.nodes.find((n) => n.id === to);
+  if (!up) return `Cannot connect: no element ${from} to feed from.`;
+  if (!down) return `Cannot connect: no element ${to} to feed.`;
+  if (from === to) return `Cannot connect ${describeNode(up)} to itself.`;
+  if (up.kind === 'load')
+    return `${describeNode(up)} is a load and feeds nothing; start the cable at a supply, board or junction.`;
+  if (down.kind === 'supply')
+    return `${describeNode(down)} is a supply and cannot be fed; connect from the supply downwards.`;
+  const dup = doc.cables.find(
+    (c) => c.id !== ignoreCable && ((c.from === from && c.to === to) || (c.from === to && c.to === from)),
+  );
+  if (dup) return `${describeCable(dup)} already joins ${from} and ${to}.`;
+  return null;
+}
+
+export function connectCable(
+  doc: ProjectDocument,
+  from: Id,
+  to: Id,
+  id?: Id,
+  patch?: CablePatch,
+): CommandResult {
+  const problem = connectionProblem(doc, from, to);
+  if (problem) return fail(problem);
+  const taken = usedIds(doc);
+  if (id !== undefined && taken.has(id))
+    return fail(`Id ${id} is already used; pick another for the new cable.`);
+  const cableId = id ?? nextId(ID_PREFIX.cable, taken);
+  const cable: Cable = { ...newCableFromDefaults(doc, cableId, from, to), ...patch, id: cableId, from, to };
+  return ok({ ...doc, cables: [...doc.cables, cable] }, [cableId]);
+}
+
+/** Merges a patch into one cable; `undefined` for an optional field (device, installation) removes it. */
+export function updateCable(doc: ProjectDocument, id: Id, patch: CablePatch): CommandResult {
+  const index = doc.cables.findIndex((c) => c.id === id);
+  const cable = doc.cables[index];
+  if (!cable) return fail(`No cable with id ${id}; it may have been deleted.`);
+  for (const key of Object.keys(patch)) {
+    if (key === 'id') return fail(`${describeCable(cable)}: the id of a cable cannot be changed.`);
+    if (!CABLE_FIELDS.includes(key)) return fail(`${describeCable(cable)}: a cable has no field "${key}".`);
+  }
+  if (patch.lengthM !== undefined && !(Number.isFinite(patch.lengthM) && patch.lengthM > 0)) {
+    return fail(`${describeCable(cable)}: length must be a positive number of metres, got ${patch.lengthM}.`);
+  }
+  if (patch.sizeMm2 !== undefined && !(Number.isFinite(patch.sizeMm2) && patch.sizeMm2 > 0)) {
+    return fail(
+      `${describeCable(cable)}: size must be a positive cross-section in mm², got ${patch.sizeMm2}.`,
+    );
+  }
+  if (patch.parallel !== undefined && !(Number.isInteger(patch.parallel) && patch.parallel >= 1)) {
+    return fail(
+      `${describeCable(cable)}: parallel must be a whole number of cables, 1 or more; got ${patch.parallel}.`,
+    );
+  }
+  const from = patch.from ?? cable.from;
+  const to = patch.to ?? cable.to;
+  if (from !== cable.from || to !== cable.to) {
+    const problem = connectionProblem(doc, from, to, cable.id);
+    if (problem) return fail(`${describeCable(cable)}: ${problem}`);
+  }
+  const merged: Record<string, unknown> = { ...cable };
+  for (const [key, value] of Object.entries(patch)) {
+    if (value === undefined) delete merged[key];
+    else merged[key] = value;
+  }
+  const cables = doc.cables.slice();
+  cables[index] = merged as unknown as Cable;
+  return ok({ ...doc, cables });
+}
