@@ -6,6 +6,12 @@
  * renaming one means updating every view.
  */
 import type { Id, Phase } from '../model/types.ts';
+import type {
+  CableProtection,
+  MotorStartResult,
+  NodeProtection,
+  ProtectionSummary,
+} from './protection/protectionResults.ts';
 
 export type Status = 'within' | 'close' | 'over';
 
@@ -60,6 +66,8 @@ export interface CableResult {
   maxLengthM: number | null;
   status: Status | null;
   working: Working[];
+  /** Device, capacity (Iz) and per-segment checks; added by attachProtection. */
+  protection?: CableProtection;
 }
 
 export interface NodeResult {
@@ -74,6 +82,8 @@ export interface NodeResult {
   currentsA: PhaseCurrents;
   status: Status | null;
   working: Working[];
+  /** Loop impedance Zs, prospective fault current and their checks; added by attachProtection. */
+  protection?: NodeProtection;
 }
 
 export interface PathShare {
@@ -88,6 +98,8 @@ export interface LoadResult extends NodeResult {
   /** Fraction of the budget used (cumulative / limit). */
   budgetUsed: number;
   shares: PathShare[];
+  /** Starting dip for a motor load; added by attachProtection. */
+  motorStart?: MotorStartResult;
 }
 
 export type Severity = 'error' | 'warning' | 'info';
@@ -122,4 +134,6 @@ export interface Results {
   profile: LimitProfileInfo;
   /** Standards and editions the figures rely on, for cautions and reports. */
   references: string[];
+  /** Counts of failed checks, phase balance per three-phase board; added by attachProtection. */
+  protection?: ProtectionSummary;
 }
