@@ -1,0 +1,221 @@
+/**
+ * The project file's validator, written with zod 4 to mirror `types.ts` exactly. The published
+ * JSON Schema (`docs/project.schema.json`, `npm run schema`) is generated from it, and a
+ * compile-time check at the bottom keeps it and the hand-written interfaces in step both ways.
+ *
+ * Ranges here are the ones a file must satisfy to be opened. Engineering judgements (a length
+ * of 0 m, a size missing from the data set, a loop) are the solver's findings, not file errors.
+ */
+import * as z from 'zod';
+import type { ProjectDocument } from './types.ts';
+import { FORMAT_ID, FORMAT_VERSION } from './types.ts';
+import { idProblem } from './ids.ts';
+
+/** Most elements (nodes and cables together) a file may hold. */
+export const MAX_ELEMENTS = 200_000;
+
+const finite = () => z.number();
+const positive = () => z.number().positive();
+const nonNegative = () => z.number().nonnegative();
+const fraction = () => z.number().positive().max(1);
+
+export const idSchema = z
+  .string()
+  .min(1)
+  .max(64)
+  .regex(/^[A-Za-z0-9][A-Za-z0-9_.-]{0,63}$/)
+  .refine((s) => idProblem(s) === null, { message: 'reserved id' });
+
+const name = () => z.string().max(200);
+
+export const positionSchema = z.strictObject({ x: finite(), y: finite() });
+const phaseCount = z.union([z.literal(1), z.literal(3)]);
+// Spelled out rather than built from PHASES / LOAD_KINDS so the inferred types are the literal
+// unions; the agreement check below catches any drift from types.ts.
+const phase = z.enum(['L1', 'L2', 'L3']);
+
+export const transformerSchema = z.strictObject({
+  kva: positive(),
+  impedancePct: z.number().positive().max(100),
+  xOverR: nonNegative(),
+});
+
+export const supplySchema = z.strictObject({
+  kind: z.literal('supply'),
+  id: idSchema,
+  name: name(),
+  position: positionSchema,
+  phases: phaseCount,
+  u0V: z.number().positive().max(1000),
+  earthing: z.enum(['TN-S', 'TN-C-S', 'TT']),
+  zeOhm: nonNegative(),
+  zeSource: z.enum(['declared', 'measured']),
+  pfcKa: positive(),
+  ownership: z.enum(['public', 'private']),
+  transformer: transformerSchema.optional(),
+  raOhm: nonNegative().optional(),
+});
+
+export const boardSchema = z.strictObject({
+  kind: z.literal('board'),
+  id: idSchema,
+  name: name(),
+  position: positionSchema,
+  diversity: fraction(),
+});
+
+export const junctionSchema = z.strictObject({
+  kind: z.literal('junction'),
+  id: idSchema,
+  name: name(),
+  position: positionSchema,
+});
+
+export const motorStartSchema = z.strictObject({
+  startMultiple: z.number().min(1).max(20),
+  startPowerFactor: fraction(),
+  dipLimitPct: z.number().positive().max(100),
+});
+
+export const loadSchema = z.strictObject({
+  kind: z.literal('load'),
+  id: idSchema,
+  name: name(),
+  position: positionSchema,
+  loadKind: z.enum([
+    'lighting',
+    'sockets',
+    'heating',
+    'cooking',
+    'waterHeating',
+    'motor',
+    'evCharging',
+    'hvac',
+    'other',
+  ]),
+  category: z.enum(['lighting', 'other']),
+  demand: z.strictObject({ value: nonNegative(), unit: z.enum(['W', 'kW', 'kVA', 'A']) }),
+  powerFactor: fraction(),
+  phases: phaseCount,
+  phase,
+  demandFactor: fraction(),
+  motor: motorStartSchema.optional(),
+});
+
+export const nodeSchema = z.discriminatedUnion('kind', [
+  supplySchema,
+  boardSchema,
+  junctionSchema,
+  loadSchema,
+]);
+
+export const cpcSchema = z.strictObject({
+  kind: z.enum(['core', 'separate', 'armour']),
+  sizeMm2: positive(),
+  material: z.enum(['Cu', 'Al', 'steel']),
+});
+
+export const deviceSchema = z.strictObject({
+  type: z.enum(['mcb', 'rcbo', 'fuseGG', 'mccb']),
+  curve: z.enum(['B', 'C', 'D']).optional(),
+  ratingA: positive(),
+  breakingKa: positive(),
+  irMultiple: positive().optional(),
+  imMultiple: positive().optional(),
+  rcd: z.strictObject({ type: z.enum(['AC', 'A', 'F', 'B']), idnMa: positive() }).optional(),
+});
+
+export const installationSchema = z.strictObject({
+  method: z.enum([
+    'clippedDirect',
+    'conduitOnWall',
+    'conduitInInsulatedWall',
+    'trayOrFreeAir',
+    'buriedDirect',
+    'buriedDuct',
+    'inInsulation',
+    'aboveInsulation',
+  ]),
+  ambientC: z.number().min(-50).max(100),
+  groupedCircuits: z.number().int().min(1).max(1000),
+  groupArrangement: z.enum(['bunched', 'singleLayer', 'tray']),
+  insulationFactor: fraction(),
+});
+
+const cableBody = {
+  // Zero is allowed (a cable not yet measured); the solver reports it. Negative never is.
+  lengthM: nonNegative(),
+  material: z.enum(['Cu', 'Al']),
+  insulation: z.enum(['thermoplastic70', 'thermosetting90']),
+  construction: z.enum(['flatTwinEarth', 'multicore', 'armouredMulticore', 'singleCore']),
+  sizeMm2: positive(),
+  cpc: cpcSchema,
+  phases: phaseCount,
+  parallel: z.number().int().min(1).max(50),
+  device: deviceSchema.optional(),
+  installation: installationSchema.optional(),
+};
+
+export const cableSchema = z.strictObject({
+  id: idSchema,
+  name: name(),
+  from: idSchema,
+  to: idSchema,
+  ...cableBody,
+});
+
+export const cableDefaultsSchema = z.strictObject(cableBody);
+
+export const detailsSchema = z.strictObject({
+  title: name(),
+  client: name(),
+  site: name(),
+  reference: name(),
+  revision: z.string().max(40),
+  author: name(),
+  date: z.string().max(40),
+  notes: z.string().max(20_000),
+});
+
+export const settingsSchema = z.strictObject({
+  frequencyHz: z.union([z.literal(50), z.literal(60)]),
+  u0V: z.number().positive().max(1000),
+  uLlV: z.number().positive().max(1000),
+  limitProfile: z.enum(['iecPublic', 'iecPrivate', 'nec', 'asnzs', 'custom']),
+  customLimits: z.strictObject({
+    lightingPct: z.number().positive().max(100),
+    otherPct: z.number().positive().max(100),
+  }),
+  longRunAllowance: z.boolean(),
+  closeThreshold: z.number().positive().lt(1),
+  designCurrentBasis: z.enum(['Ib', 'In']),
+  dataSet: z.string().min(1).max(200),
+  cableDefaults: cableDefaultsSchema,
+});
+
+export const documentSchema = z
+  .strictObject({
+    format: z.literal(FORMAT_ID),
+    version: z.literal(FORMAT_VERSION),
+    details: detailsSchema,
+    settings: settingsSchema,
+    nodes: z.array(nodeSchema).max(MAX_ELEMENTS),
+    cables: z.array(cableSchema).max(MAX_ELEMENTS),
+  })
+  .meta({
+    title: 'Dropline project',
+    description:
+      'A low-voltage distribution layout: supply, boards, junctions, loads and the cables between them.',
+  });
+
+export type DocumentFromSchema = z.infer<typeof documentSchema>;
+
+// Compile-time agreement between the schema and the hand-written types, both ways: if either
+// side gains, loses or changes a field, `tsc` fails on one of these lines.
+type Equals<A, B> = (<T>() => T extends A ? 1 : 2) extends <T>() => T extends B ? 1 : 2 ? true : false;
+const schemaMatchesTypes: Equals<DocumentFromSchema, ProjectDocument> = true;
+const typesAssignToSchema: ProjectDocument extends DocumentFromSchema ? true : false = true;
+const schemaAssignsToTypes: DocumentFromSchema extends ProjectDocument ? true : false = true;
+void schemaMatchesTypes;
+void typesAssignToSchema;
+void schemaAssignsToTypes;
