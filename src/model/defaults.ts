@@ -23,8 +23,11 @@ import type {
 } from './types.ts';
 import { FORMAT_ID, FORMAT_VERSION } from './types.ts';
 
-/** The id of the built-in conductor data set (derived from IEC 60228, see src/catalogue). */
-export const BUILT_IN_DATA_SET = 'builtin';
+/**
+ * The id of the built-in conductor data set (derived from IEC 60228, see src/catalogue). Spelled
+ * here because the model sits below the catalogue; a test keeps the two equal.
+ */
+export const BUILT_IN_DATA_SET = 'builtin-iec60228';
 
 export type CableDefaults = Settings['cableDefaults'];
 

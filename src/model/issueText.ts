@@ -68,6 +68,15 @@ const FIELD_TEXT: Readonly<Record<string, string>> = {
   notes: 'text',
 };
 
+const EXPECTED_TEXT: Readonly<Record<string, string>> = {
+  number: 'a finite number',
+  int: 'a whole number',
+  string: 'text',
+  boolean: 'true or false',
+  object: 'an object',
+  array: 'a list',
+};
+
 /** Reads a value from the raw (unvalidated) file by a validator path; never throws. */
 export function valueAt(root: unknown, path: readonly PropertyKey[]): unknown {
   let v: unknown = root;
@@ -173,7 +182,7 @@ export function issueMessage(root: unknown, issue: z.core.$ZodIssue): string {
   switch (issue.code) {
     case 'invalid_type':
       if (raw === undefined) return `${where}: ${field} is missing; add ${what}`;
-      return `${where}: ${field} must be ${what} (${issue.expected === 'number' ? 'a finite number' : `a ${issue.expected}`}); got ${got}`;
+      return `${where}: ${field} must be ${what} (${EXPECTED_TEXT[issue.expected] ?? `a ${issue.expected}`}); got ${got}`;
     case 'too_small':
     case 'too_big':
       return `${where}: ${field} must be ${what}, ${rangeText(issue)}; got ${got}`;
