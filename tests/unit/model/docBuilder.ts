@@ -32,6 +32,8 @@ export function smallDoc(): ProjectDocument {
 }
 
 /** The document as JSON text with a change applied to a plain copy. */
+// The copy is untyped on purpose: tests write wrong types into it.
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
 export function textWith(change: (raw: Record<string, any>) => void): string {
   const raw = JSON.parse(JSON.stringify(smallDoc()));
   change(raw);
