@@ -1,0 +1,93 @@
+import { useMemo, useState } from 'react';
+import { useEditor } from '../../store/editorStore.ts';
+import {
+  boardSchedule,
+  cableSchedule,
+  loadSchedule,
+  ALL_STATUSES,
+  type StatusFilter,
+} from './scheduleRows.ts';
+import { ScheduleTable } from './ScheduleTable.tsx';
+import { statusLook as lookOf } from '../status.ts';
+import './panels.css';
+import './tables.css';
+
+type Sheet = 'cables' | 'loads' | 'boards';
+const SHEETS: { id: Sheet; label: string }[] = [
+  { id: 'cables', label: 'Cable schedule' },
+  { id: 'loads', label: 'Loads' },
+  { id: 'boards', label: 'Board schedule' },
+];
+const FILTER_KEYS = ['within', 'close', 'over', 'none'] as const;
+
+/** The schedules drawer: cables, loads and boards with the solver's figures, sortable and filterable. */
+export function SchedulesDrawer() {
+  const open = useEditor((s) => s.view.drawer === 'schedules');
+  const doc = useEditor((s) => s.doc);
+  const results = useEditor((s) => s.results);
+  const selection = useEditor((s) => s.selection);
+  const reveal = useEditor((s) => s.reveal);
+  const openDrawer = useEditor((s) => s.openDrawer);
+  const [sheet, setSheet] = useState<Sheet>('cables');
+  const [filter, setFilter] = useState<StatusFilter>(ALL_STATUSES);
+  const schedule = useMemo(() => {
+    if (!open) return null;
+    if (sheet === 'cables') return cableSchedule(doc, results);
+    if (sheet === 'loads') return loadSchedule(doc, results);
+    return boardSchedule(doc, results);
+  }, [open, sheet, doc, results]);
+  if (!open || !schedule) return null;
+
+  const counts = FILTER_KEYS.map(
+    (k) => [k, schedule.rows.filter((r) => (r.status ?? 'none') === k).length] as const,
+  );
+  return (
+    <section className="dl-panel dl-drawer" data-testid="schedules-drawer" aria-label="Schedules">
+      <header className="dl-drawer-head">
+        <div className="dl-tabs" role="tablist" aria-label="Schedule">
+          {SHEETS.map((s) => (
+            <button
+              key={s.id}
+              type="button"
+              role="tab"
+              aria-selected={sheet === s.id}
+              data-testid={`sheet-${s.id}`}
+              onClick={() => setSheet(s.id)}
+            >
+              {s.label}
+            </button>
+          ))}
+        </div>
+        <fieldset className="dl-filter" aria-label="Show rows with status">
+          {counts.map(([k, n]) => {
+            const look = lookOf(k === 'none' ? null : k);
+            return (
+              <label key={k} style={{ color: look.colour }}>
+                <input
+                  type="checkbox"
+                  checked={filter[k]}
+                  data-testid={`filter-${k}`}
+                  onChange={(e) => setFilter({ ...filter, [k]: e.target.checked })}
+                />
+                <span aria-hidden="true">{look.glyph}</span> {look.word} ({n})
+              </label>
+            );
+          })}
+        </fieldset>
+        <button type="button" onClick={() => openDrawer(null)} aria-label="Close the schedules">
+          Close
+        </button>
+      </header>
+      <div className="dl-drawer-body">
+        <ScheduleTable
+          key={sheet}
+          schedule={schedule}
+          filter={filter}
+          selection={selection}
+          onPick={reveal}
+          testId={`schedule-${sheet}`}
+        />
+      </div>
+    </section>
+  );
+}

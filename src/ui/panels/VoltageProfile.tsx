@@ -1,0 +1,115 @@
+import type { Profile } from './buildProfile.ts';
+import { fmt } from './format.ts';
+import { STATUS_LOOK } from '../status.ts';
+
+const W = 330;
+const H = 210;
+const M = { left: 40, right: 12, top: 14, bottom: 34 };
+
+/** A tidy axis maximum: 1, 2, 2.5 or 5 times a power of ten, at least `v`. */
+function niceCeil(v: number): number {
+  if (v <= 0) return 1;
+  const p = 10 ** Math.floor(Math.log10(v));
+  for (const m of [1, 2, 2.5, 5, 10]) if (m * p >= v) return m * p;
+  return 10 * p;
+}
+
+/**
+ * Drop along a load's path, drawn by hand in SVG. The drop axis grows downwards, so the line falls
+ * from the origin the way the voltage does. Points are the solver's figures at each node; the
+ * dashed line is the limit that applies to the load.
+ */
+export function VoltageProfile({ profile }: { profile: Profile }) {
+  const { points, limit } = profile;
+  const last = points[points.length - 1]!;
+  const maxX = niceCeil(Math.max(last.distanceM, 1));
+  const maxY = niceCeil(Math.max(limit.value, ...points.map((p) => p.dropPct)) * 1.08);
+  const x = (d: number) => M.left + (d / maxX) * (W - M.left - M.right);
+  const y = (pct: number) => M.top + (pct / maxY) * (H - M.top - M.bottom);
+  const yTicks = [0, 0.25, 0.5, 0.75, 1].map((f) => f * maxY);
+  const xTicks = [0, 0.5, 1].map((f) => f * maxX);
+  const over = last.dropPct > limit.value;
+  const lineColour = over ? STATUS_LOOK.over.colour : '#2c5f7c';
+  const path = points
+    .map((p, i) => `${i === 0 ? 'M' : 'L'}${x(p.distanceM).toFixed(1)},${y(p.dropPct).toFixed(1)}`)
+    .join(' ');
+
+  return (
+    <figure className="dl-profile" data-testid="voltage-profile" style={{ margin: 0 }}>
+      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={`Drop along the path to ${last.name}`}>
+        <rect
+          x={M.left}
+          y={M.top}
+          width={W - M.left - M.right}
+          height={H - M.top - M.bottom}
+          fill="#f8faf9"
+          stroke="#d8dde1"
+        />
+        {yTicks.map((t) => (
+          <g key={`y${t}`}>
+            <line x1={M.left} x2={W - M.right} y1={y(t)} y2={y(t)} stroke="#e6eaec" />
+            <text x={M.left - 4} y={y(t) + 3} textAnchor="end">
+              {fmt(t, maxY < 2 ? 2 : 1)}
+            </text>
+          </g>
+        ))}
+        {xTicks.map((t) => (
+          <text key={`x${t}`} x={x(t)} y={H - M.bottom + 12} textAnchor="middle">
+            {fmt(t, 0)} m
+          </text>
+        ))}
+        <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle">
+          distance from the origin along the route
+        </text>
+        <text transform={`translate(10 ${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle">
+          drop, % of {profile.basis}
+        </text>
+        <line
+          x1={M.left}
+          x2={W - M.right}
+          y1={y(limit.value)}
+          y2={y(limit.value)}
+          stroke={STATUS_LOOK.over.colour}
+          strokeDasharray="6 3"
+          data-testid="profile-limit"
+        />
+        <text
+          x={W - M.right - 2}
+          y={y(limit.value) - 3}
+          textAnchor="end"
+          style={{ fill: STATUS_LOOK.over.colour }}
+        >
+          limit {fmt(limit.value, 2)} %
+        </text>
+        <path d={path} fill="none" stroke={lineColour} strokeWidth={2} />
+        {points.map((p, i) => (
+          <g key={p.nodeId} data-testid="profile-point" data-node={p.nodeId}>
+            <circle
+              cx={x(p.distanceM)}
+              cy={y(p.dropPct)}
+              r={3.2}
+              fill="#fff"
+              stroke={lineColour}
+              strokeWidth={1.6}
+            />
+            <text
+              x={x(p.distanceM) + (i === points.length - 1 ? -4 : 4)}
+              y={y(p.dropPct) + (i % 2 === 0 ? -6 : 12)}
+              textAnchor={i === points.length - 1 ? 'end' : 'start'}
+              style={{ fill: '#1e2931' }}
+            >
+              {p.name}
+            </text>
+            <title>
+              {`${p.name}: ${fmt(p.distanceM, 0)} m from the origin, ${fmt(p.dropPct, 2)} % drop` +
+                (p.voltageV !== undefined ? `, ${fmt(p.voltageV, 1)} V` : '')}
+            </title>
+          </g>
+        ))}
+      </svg>
+      <figcaption className="dl-hint">
+        Points: cumulative drop the solver reports at each node. Dashed: the limit for this load.
+      </figcaption>
+    </figure>
+  );
+}

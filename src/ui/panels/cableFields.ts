@@ -1,0 +1,319 @@
+/** The editable fields of a cable segment, its protective device and its installation. */
+import { standardSizes } from '../../catalogue/iec60228.ts';
+import type { Cable, Device, Installation, PhaseCount } from '../../model/types.ts';
+import type { FieldGroup, NumberField, NumberRule } from './fieldSpec.ts';
+import {
+  ARRANGEMENT_OPTIONS,
+  CONSTRUCTION_OPTIONS,
+  CPC_KIND_OPTIONS,
+  CPC_MATERIAL_OPTIONS,
+  CURVE_OPTIONS,
+  DEVICE_TYPE_OPTIONS,
+  INSULATION_OPTIONS,
+  MATERIAL_OPTIONS,
+  METHOD_OPTIONS,
+  PHASE_COUNT_OPTIONS,
+  RCD_TYPE_OPTIONS,
+} from './options.ts';
+
+type P = Partial<Cable>;
+
+const sizeOptions = (c: Cable) => {
+  const sizes = standardSizes(c.material);
+  // Keep a non-standard size already in the document selectable, so opening a file never alters it.
+  if (!sizes.includes(c.sizeMm2)) sizes.push(c.sizeMm2);
+  return sizes.sort((a, b) => a - b).map((s) => ({ value: String(s), label: `${s} mm²` }));
+};
+
+// Offered when the user adds a device or an installation record; visible in the form at once so
+// the user replaces them with the real ones.
+const DEVICE_OFFER: Device = { type: 'mcb', curve: 'B', ratingA: 32, breakingKa: 6 };
+const INSTALLATION_OFFER: Installation = {
+  method: 'clippedDirect',
+  ambientC: 30,
+  groupedCircuits: 1,
+  groupArrangement: 'bunched',
+  insulationFactor: 1,
+};
+
+function deviceNumber(
+  key: keyof Device & string,
+  label: string,
+  unit: string,
+  rule: NumberRule,
+  shown: (d: Device) => boolean = () => true,
+): NumberField<Cable, P> {
+  return {
+    kind: 'number',
+    key: `device.${key}`,
+    label,
+    unit,
+    rule,
+    shown: (c) => c.device !== undefined && shown(c.device),
+    get: (c) => c.device?.[key] as number | undefined,
+    set: (c, v) => ({ device: { ...DEVICE_OFFER, ...c.device, [key]: v } }),
+  };
+}
+
+function installNumber(
+  key: keyof Installation & string,
+  label: string,
+  unit: string,
+  rule: NumberRule,
+  hint?: string,
+): NumberField<Cable, P> {
+  return {
+    kind: 'number',
+    key: `installation.${key}`,
+    label,
+    unit,
+    rule,
+    hint,
+    shown: (c) => c.installation !== undefined,
+    get: (c) => c.installation?.[key] as number | undefined,
+    set: (c, v) => ({ installation: { ...INSTALLATION_OFFER, ...c.installation, [key]: v } }),
+  };
+}
+
+export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
+  {
+    title: 'Cable',
+    fields: [
+      {
+        kind: 'text',
+        key: 'name',
+        label: 'Name',
+        required: true,
+        get: (c) => c.name,
+        set: (_c, name) => ({ name }),
+      },
+      {
+        kind: 'number',
+        key: 'lengthM',
+        label: 'Route length (one way)',
+        unit: 'm',
+        rule: { min: 0, minExclusive: true, max: 10000 },
+        get: (c) => c.lengthM,
+        set: (_c, lengthM) => ({ lengthM }),
+      },
+      {
+        kind: 'choice',
+        key: 'phases',
+        label: 'Phases',
+        options: PHASE_COUNT_OPTIONS,
+        get: (c) => String(c.phases),
+        set: (_c, v) => ({ phases: Number(v) as PhaseCount }),
+      },
+      {
+        kind: 'number',
+        key: 'parallel',
+        label: 'Cables in parallel',
+        unit: '',
+        rule: { min: 1, max: 20, integer: true },
+        get: (c) => c.parallel,
+        set: (_c, parallel) => ({ parallel }),
+      },
+    ],
+  },
+  {
+    title: 'Construction',
+    fields: [
+      {
+        kind: 'choice',
+        key: 'material',
+        label: 'Conductor',
+        options: MATERIAL_OPTIONS,
+        get: (c) => c.material,
+        set: (_c, v) => ({ material: v as Cable['material'] }),
+      },
+      {
+        kind: 'choice',
+        key: 'sizeMm2',
+        label: 'Line conductor size',
+        options: sizeOptions,
+        get: (c) => String(c.sizeMm2),
+        set: (_c, v) => ({ sizeMm2: Number(v) }),
+      },
+      {
+        kind: 'choice',
+        key: 'insulation',
+        label: 'Insulation',
+        options: INSULATION_OPTIONS,
+        get: (c) => c.insulation,
+        set: (_c, v) => ({ insulation: v as Cable['insulation'] }),
+      },
+      {
+        kind: 'choice',
+        key: 'construction',
+        label: 'Construction',
+        options: CONSTRUCTION_OPTIONS,
+        get: (c) => c.construction,
+        set: (_c, v) => ({ construction: v as Cable['construction'] }),
+      },
+    ],
+  },
+  {
+    title: 'Protective conductor (cpc)',
+    fields: [
+      {
+        kind: 'choice',
+        key: 'cpc.kind',
+        label: 'Provided by',
+        options: CPC_KIND_OPTIONS,
+        get: (c) => c.cpc.kind,
+        set: (c, v) => ({ cpc: { ...c.cpc, kind: v as Cable['cpc']['kind'] } }),
+      },
+      {
+        kind: 'number',
+        key: 'cpc.sizeMm2',
+        label: 'cpc cross-section',
+        unit: 'mm²',
+        rule: { min: 0, minExclusive: true, max: 1000 },
+        get: (c) => c.cpc.sizeMm2,
+        set: (c, sizeMm2) => ({ cpc: { ...c.cpc, sizeMm2 } }),
+      },
+      {
+        kind: 'choice',
+        key: 'cpc.material',
+        label: 'cpc material',
+        options: CPC_MATERIAL_OPTIONS,
+        get: (c) => c.cpc.material,
+        set: (c, v) => ({ cpc: { ...c.cpc, material: v as Cable['cpc']['material'] } }),
+      },
+    ],
+  },
+  {
+    title: 'Protective device (sending end)',
+    fields: [
+      {
+        kind: 'toggle',
+        key: 'device',
+        label: 'Device fitted',
+        get: (c) => c.device !== undefined,
+        set: (_c, on) => ({ device: on ? { ...DEVICE_OFFER } : undefined }),
+      },
+      {
+        kind: 'choice',
+        key: 'device.type',
+        label: 'Type',
+        options: DEVICE_TYPE_OPTIONS,
+        shown: (c) => c.device !== undefined,
+        get: (c) => c.device?.type ?? 'mcb',
+        set: (c, v) => ({ device: { ...DEVICE_OFFER, ...c.device, type: v as Device['type'] } }),
+      },
+      {
+        kind: 'choice',
+        key: 'device.curve',
+        label: 'Curve',
+        options: CURVE_OPTIONS,
+        shown: (c) => c.device?.type === 'mcb' || c.device?.type === 'rcbo',
+        get: (c) => c.device?.curve ?? 'B',
+        set: (c, v) => ({ device: { ...DEVICE_OFFER, ...c.device, curve: v as Device['curve'] } }),
+      },
+      deviceNumber('ratingA', 'Rating In', 'A', { min: 0, minExclusive: true, max: 6300 }),
+      deviceNumber('breakingKa', 'Breaking capacity', 'kA', { min: 0, minExclusive: true, max: 200 }),
+      deviceNumber(
+        'irMultiple',
+        'Long-time setting Ir (× In)',
+        '',
+        { min: 0.4, max: 1 },
+        (d) => d.type === 'mccb',
+      ),
+      deviceNumber(
+        'imMultiple',
+        'Instantaneous setting Im (× Ir)',
+        '',
+        { min: 1.5, max: 20 },
+        (d) => d.type === 'mccb',
+      ),
+      {
+        kind: 'toggle',
+        key: 'device.rcd',
+        label: 'RCD fitted',
+        shown: (c) => c.device !== undefined,
+        get: (c) => c.device?.rcd !== undefined,
+        set: (c, on) => ({
+          device: { ...DEVICE_OFFER, ...c.device, rcd: on ? { type: 'A', idnMa: 30 } : undefined },
+        }),
+      },
+      {
+        kind: 'choice',
+        key: 'device.rcd.type',
+        label: 'RCD type',
+        options: RCD_TYPE_OPTIONS,
+        shown: (c) => c.device?.rcd !== undefined,
+        get: (c) => c.device?.rcd?.type ?? 'A',
+        set: (c, v) => ({
+          device: {
+            ...DEVICE_OFFER,
+            ...c.device,
+            rcd: { idnMa: 30, ...c.device?.rcd, type: v as 'AC' | 'A' | 'F' | 'B' },
+          },
+        }),
+      },
+      {
+        kind: 'number',
+        key: 'device.rcd.idnMa',
+        label: 'Rated residual current IΔn',
+        unit: 'mA',
+        rule: { min: 0, minExclusive: true, max: 3000 },
+        shown: (c) => c.device?.rcd !== undefined,
+        get: (c) => c.device?.rcd?.idnMa,
+        set: (c, idnMa) => ({
+          device: { ...DEVICE_OFFER, ...c.device, rcd: { type: 'A', ...c.device?.rcd, idnMa } },
+        }),
+      },
+    ],
+  },
+  {
+    title: 'Installation',
+    fields: [
+      {
+        kind: 'toggle',
+        key: 'installation',
+        label: 'Installation conditions given',
+        get: (c) => c.installation !== undefined,
+        set: (_c, on) => ({ installation: on ? { ...INSTALLATION_OFFER } : undefined }),
+      },
+      {
+        kind: 'choice',
+        key: 'installation.method',
+        label: 'Reference method',
+        options: METHOD_OPTIONS,
+        shown: (c) => c.installation !== undefined,
+        get: (c) => c.installation?.method ?? 'clippedDirect',
+        set: (c, v) => ({
+          installation: { ...INSTALLATION_OFFER, ...c.installation, method: v as Installation['method'] },
+        }),
+      },
+      installNumber('ambientC', 'Ambient temperature', '°C', { min: -30, max: 80 }),
+      installNumber('groupedCircuits', 'Circuits grouped (this one included)', '', {
+        min: 1,
+        max: 100,
+        integer: true,
+      }),
+      {
+        kind: 'choice',
+        key: 'installation.groupArrangement',
+        label: 'Grouping arrangement',
+        options: ARRANGEMENT_OPTIONS,
+        shown: (c) => c.installation !== undefined,
+        get: (c) => c.installation?.groupArrangement ?? 'bunched',
+        set: (c, v) => ({
+          installation: {
+            ...INSTALLATION_OFFER,
+            ...c.installation,
+            groupArrangement: v as Installation['groupArrangement'],
+          },
+        }),
+      },
+      installNumber(
+        'insulationFactor',
+        'Thermal insulation factor Ci',
+        '',
+        { min: 0, minExclusive: true, max: 1 },
+        '1 where the cable does not pass through insulation.',
+      ),
+    ],
+  },
+];
