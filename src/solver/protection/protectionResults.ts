@@ -15,7 +15,6 @@ export type CheckKey =
   | 'rcdTouch' // RA x IΔn <= 50 V (TT) or Zs x IΔn <= 50 V
   | 'breaking' // breaking capacity >= prospective fault current at the device
   | 'cpc' // adiabatic check on the protective conductor (or the table minimum)
-  | 'lineWithstand' // adiabatic check on the line conductor
   | 'motorDip'; // starting dip at the motor within the user's limit
 
 export interface Check {

@@ -1,0 +1,110 @@
+/**
+ * Current-carrying capacity of a cable segment: Iz = It x Ca x Cg x Ci (x parallel cables).
+ */
+import type { Cable, Installation } from '../../model/types.ts';
+import { lookupCapacity, type CapacityTable } from '../../catalogue/capacityTables.ts';
+import { groupingFactor, temperatureFactor } from '../../catalogue/capacityFactors.ts';
+import type { Working } from '../results.ts';
+import { working } from './working.ts';
+
+/** Reference conditions assumed when a cable has no installation given (common practice defaults). */
+export const REFERENCE_INSTALLATION: Installation = {
+  method: 'clippedDirect',
+  ambientC: 30,
+  groupedCircuits: 1,
+  groupArrangement: 'bunched',
+  insulationFactor: 1,
+};
+
+export interface CapacityOk {
+  itA: number;
+  izA: number;
+  ca: number;
+  cg: number;
+  ci: number;
+  tableId: string;
+  working: Working;
+  notes: string[];
+}
+
+/**
+ * Iz for a cable, or a message naming what is missing and how to fix it.
+ * @example cableCapacity(cable2_5TwinEarthClipped)  // { itA: 27, izA: 27, ... }
+ */
+export function cableCapacity(
+  cable: Cable,
+  tables: readonly CapacityTable[],
+): CapacityOk | { error: string } {
+  const inst = cable.installation ?? REFERENCE_INSTALLATION;
+  const notes: string[] = [];
+  if (!cable.installation)
+    notes.push('installation not given: reference method C, 30 °C, not grouped assumed');
+  const loaded = cable.phases === 3 ? 3 : 2;
+  const cell = lookupCapacity(
+    {
+      material: cable.material,
+      insulation: cable.insulation,
+      construction: cable.construction,
+      method: inst.method,
+      loaded,
+      sizeMm2: cable.sizeMm2,
+    },
+    tables,
+  );
+  if (!cell) {
+    return {
+      error: `no capacity data for ${cable.material} ${cable.insulation} ${cable.construction} ${cable.sizeMm2} mm², method ${inst.method}, ${loaded} loaded conductors: choose another method or size, or load a capacity data set that covers it`,
+    };
+  }
+  const temp = temperatureFactor(cable.insulation, inst.ambientC, cell.table.referenceC);
+  if (!temp) {
+    return {
+      error: `ambient ${inst.ambientC} °C is beyond the correction table for ${cable.insulation} insulation: lower the ambient or use higher-temperature insulation`,
+    };
+  }
+  const buried = inst.method === 'buriedDirect' || inst.method === 'buriedDuct';
+  const group = groupingFactor(inst.groupArrangement, inst.groupedCircuits);
+  if (!group) {
+    return {
+      error: `grouping of ${inst.groupedCircuits} bunched circuits is beyond the grouping table (20): split the group or enter a factor from a licensed table`,
+    };
+  }
+  if (buried && inst.groupedCircuits > 1) {
+    notes.push(
+      'buried circuits grouped: the air-grouping factor is used; check against the buried-grouping table',
+    );
+  }
+  const ci = inst.insulationFactor > 0 ? Math.min(1, inst.insulationFactor) : 1;
+  const n = Math.max(1, cable.parallel);
+  if (n > 1) notes.push(`${n} cables in parallel, taken as sharing current equally`);
+  const izA = cell.itA * temp.factor * group.factor * ci * n;
+  return {
+    itA: cell.itA,
+    izA,
+    ca: temp.factor,
+    cg: group.factor,
+    ci,
+    tableId: cell.table.id,
+    notes,
+    working: working(
+      'iz',
+      'Current-carrying capacity Iz',
+      n > 1 ? 'Iz = It x Ca x Cg x Ci x n' : 'Iz = It x Ca x Cg x Ci',
+      [
+        [
+          'It',
+          cell.itA,
+          'A',
+          `${cell.table.title}, column ${cell.column.label}, ${loaded} loaded conductors`,
+        ],
+        ['Ca', temp.factor, '', `${temp.source} at ${temp.usedAt} °C (ambient ${inst.ambientC} °C)`],
+        ['Cg', group.factor, '', `${group.source}, ${inst.groupArrangement}, ${group.usedAt} circuits`],
+        ['Ci', ci, '', 'installation.insulationFactor'],
+        ...(n > 1 ? [['n', n, 'cables', 'cable.parallel'] as const] : []),
+      ],
+      izA,
+      'A',
+      notes.length ? notes.join('; ') : undefined,
+    ),
+  };
+}
