@@ -174,6 +174,14 @@ export function breakingCheck(cable: Cable, device: Device, pfcA: number, where:
 }
 
 /**
+ * Smallest conductor that withstands a fault adiabatically: S = sqrt(I² t) / k.
+ * @example adiabaticMinimumMm2(3000, 0.4, 115) // 16.50
+ */
+export function adiabaticMinimumMm2(currentA: number, timeS: number, k: number): number {
+  return Math.sqrt(currentA * currentA * timeS) / k;
+}
+
+/**
  * Adiabatic check on the cpc, S >= sqrt(I²t)/k (IEC 60364-5-54 543.1.2), at the earth fault current
  * at the far end of the segment, where it is least and the disconnection slowest. A cpc chosen by the
  * table method (Table 54.7, same material as the line) passes without calculation.
@@ -216,7 +224,7 @@ export function cpcCheck(
       ),
     );
   }
-  const sMin = Math.sqrt(earthFaultA * earthFaultA * t) / k;
+  const sMin = adiabaticMinimumMm2(earthFaultA, t, k);
   const ok = cpcMm2 >= sMin || byTable;
   return check(
     'cpc',
