@@ -1,9 +1,13 @@
-import { CAUTIONS } from '../model/cautions.ts';
+/**
+ * `dropline` command-line entry (bin/dropline.mjs runs it through tsx). Everything but the process
+ * lives in run.ts so it can be tested without spawning.
+ */
+import { nodeIo, runCli } from './run.ts';
 
-// Placeholder until the check command lands: prints the cautions and usage.
-const [command] = process.argv.slice(2);
-if (command !== 'check') {
-  console.log('usage: dropline check FILE [--json] [--working ID]');
-  for (const c of CAUTIONS) console.log(`! ${c}`);
-  process.exit(command ? 2 : 0);
-}
+// A reader that stops early (`dropline check x.json | head`) is not an error of ours.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+  throw e;
+});
+
+process.exitCode = runCli(process.argv.slice(2), nodeIo);

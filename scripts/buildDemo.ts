@@ -1,0 +1,377 @@
+/**
+ * Writes public/demo-project.json: an invented joinery workshop with offices and a timber store
+ * across the yard. Names, figures and lengths are our own scenario. Lengths were tuned with
+ * `dropline check` so that some loads are close to their limit and some over it.
+ *
+ * Run: npx tsx scripts/buildDemo.ts
+ */
+import { writeFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import type {
+  Cable,
+  Device,
+  Installation,
+  Load,
+  LoadKind,
+  Phase,
+  ProjectDocument,
+} from '../src/model/types.ts';
+import { newBoard, newCable, newJunction, newLoad, newProject } from '../src/model/defaults.ts';
+import { parseDocument } from '../src/model/parseDocument.ts';
+import { serializeDocument } from '../src/model/serializeDocument.ts';
+
+const doc: ProjectDocument = newProject({ date: '2025-03-14' });
+doc.details = {
+  title: 'Pellow Brook Joinery: workshop, offices and timber store',
+  client: 'Pellow Brook Joinery Ltd',
+  site: 'Unit 3, Pellow Brook Farm, Eastmoor',
+  reference: 'PBJ-E-001',
+  revision: 'B',
+  author: 'D. Marsh',
+  date: '2025-03-14',
+  notes:
+    'Demo project (invented scenario). Public three-phase supply at the workshop; the timber store is ' +
+    'fed across the yard by a buried sub-main that changes size at the yard junction. Ze and fault ' +
+    'level are the supply company declared maxima and must be confirmed on site.',
+};
+
+const supply = doc.nodes[0]!;
+supply.name = 'Supply 100 A TP&N';
+supply.position = { x: 0, y: 0 };
+
+const T_E: Partial<Cable> = { construction: 'flatTwinEarth', insulation: 'thermoplastic70', phases: 1 };
+const SWA3: Partial<Cable> = { construction: 'armouredMulticore', insulation: 'thermosetting90', phases: 3 };
+const clipped: Installation = {
+  method: 'clippedDirect',
+  ambientC: 30,
+  groupedCircuits: 1,
+  groupArrangement: 'bunched',
+  insulationFactor: 1,
+};
+const grouped = (n: number): Installation => ({
+  ...clipped,
+  groupedCircuits: n,
+  groupArrangement: 'singleLayer',
+});
+const mcb = (curve: 'B' | 'C' | 'D', ratingA: number, rcd = false): Device => ({
+  type: rcd ? 'rcbo' : 'mcb',
+  curve,
+  ratingA,
+  breakingKa: 10,
+  ...(rcd ? { rcd: { type: 'A' as const, idnMa: 30 } } : {}),
+});
+const teCpc = (size: number) => ({
+  kind: 'core' as const,
+  sizeMm2: size <= 1.5 ? 1 : size <= 4 ? 1.5 : 2.5,
+  material: 'Cu' as const,
+});
+const armour = (mm2: number) => ({ kind: 'armour' as const, sizeMm2: mm2, material: 'steel' as const });
+
+let cableNo = 1;
+function cable(
+  from: string,
+  to: string,
+  name: string,
+  lengthM: number,
+  sizeMm2: number,
+  extra: Partial<Cable>,
+): void {
+  doc.cables.push(
+    newCable(`C${cableNo++}`, from, to, doc.settings.cableDefaults, { name, lengthM, sizeMm2, ...extra }),
+  );
+}
+
+let loadNo = 1;
+interface LoadSpec {
+  name: string;
+  kind: LoadKind;
+  kw?: number;
+  amps?: number;
+  pf?: number;
+  phase?: Phase;
+  three?: boolean;
+  df?: number;
+  at: number;
+}
+function load(board: string, row: number, spec: LoadSpec): string {
+  const id = `L${loadNo++}`;
+  const over: Partial<Load> = {
+    name: spec.name,
+    phase: spec.phase ?? 'L1',
+    position: { x: spec.at, y: row },
+  };
+  if (spec.kw !== undefined) over.demand = { value: spec.kw, unit: 'kW' };
+  if (spec.amps !== undefined) over.demand = { value: spec.amps, unit: 'A' };
+  if (spec.pf !== undefined) over.powerFactor = spec.pf;
+  if (spec.three !== undefined) over.phases = spec.three ? 3 : 1;
+  if (spec.df !== undefined) over.demandFactor = spec.df;
+  doc.nodes.push(newLoad(id, { x: spec.at, y: row }, spec.kind, over));
+  void board;
+  return id;
+}
+
+// Main board in the workshop, fed by 35 mm² single-core tails from the cut-out.
+doc.nodes.push(newBoard('MB', { x: 0, y: 160 }, { name: 'Main board (workshop)' }));
+cable('S1', 'MB', 'Meter tails', 3, 35, {
+  construction: 'singleCore',
+  insulation: 'thermoplastic70',
+  phases: 3,
+  cpc: { kind: 'separate', sizeMm2: 16, material: 'Cu' },
+  device: { type: 'fuseGG', ratingA: 100, breakingKa: 80 },
+  installation: clipped,
+});
+
+// Workshop final circuits straight off the main board.
+const rowA = 340;
+const ws: [LoadSpec, number, Partial<Cable>, Device][] = [
+  [
+    { name: 'Workshop high-bay lights 1', kind: 'lighting', kw: 1.2, pf: 0.95, phase: 'L1', at: -1300 },
+    32,
+    { ...T_E, sizeMm2: 1.5, cpc: teCpc(1.5) },
+    mcb('B', 10),
+  ],
+  [
+    { name: 'Workshop high-bay lights 2', kind: 'lighting', kw: 1.2, pf: 0.95, phase: 'L2', at: -1170 },
+    38,
+    { ...T_E, sizeMm2: 1.5, cpc: teCpc(1.5) },
+    mcb('B', 10),
+  ],
+  [
+    { name: 'Bench sockets north', kind: 'sockets', amps: 20, pf: 0.95, phase: 'L1', df: 0.8, at: -1040 },
+    26,
+    { ...T_E, sizeMm2: 4, cpc: teCpc(4) },
+    mcb('B', 32, true),
+  ],
+  [
+    { name: 'Bench sockets south', kind: 'sockets', amps: 20, pf: 0.95, phase: 'L3', df: 0.8, at: -910 },
+    30,
+    { ...T_E, sizeMm2: 4, cpc: teCpc(4) },
+    mcb('B', 32, true),
+  ],
+  [
+    { name: 'Panel saw', kind: 'motor', kw: 5.5, pf: 0.85, three: true, at: -780 },
+    18,
+    { ...SWA3, sizeMm2: 4, cpc: armour(35) },
+    mcb('C', 20),
+  ],
+  [
+    { name: 'Spindle moulder', kind: 'motor', kw: 4, pf: 0.84, three: true, at: -650 },
+    22,
+    { ...SWA3, sizeMm2: 2.5, cpc: armour(19) },
+    mcb('C', 16),
+  ],
+  [
+    { name: 'Dust extractor', kind: 'motor', kw: 7.5, pf: 0.86, three: true, at: -520 },
+    28,
+    { ...SWA3, sizeMm2: 4, cpc: armour(35) },
+    mcb('D', 25),
+  ],
+  [
+    { name: 'Compressor', kind: 'motor', kw: 3, pf: 0.82, three: true, at: -390 },
+    12,
+    { ...SWA3, sizeMm2: 2.5, cpc: armour(19) },
+    mcb('C', 16),
+  ],
+  [
+    { name: 'Yard lights (front)', kind: 'lighting', kw: 0.4, pf: 0.9, phase: 'L2', at: -260 },
+    46,
+    {
+      construction: 'armouredMulticore',
+      insulation: 'thermosetting90',
+      phases: 1,
+      sizeMm2: 1.5,
+      cpc: armour(14),
+    },
+    mcb('B', 6),
+  ],
+];
+for (const [spec, len, c, dev] of ws) {
+  const id = load('MB', rowA, spec);
+  cable('MB', id, spec.name, len, c.sizeMm2!, { ...c, device: dev, installation: grouped(6) });
+}
+for (const m of doc.nodes)
+  if (m.kind === 'load' && m.loadKind === 'motor')
+    m.motor = { startMultiple: 6, startPowerFactor: 0.3, dipLimitPct: 10 };
+
+// Offices: a single-phase board on L2.
+doc.nodes.push(newBoard('DB2', { x: 0, y: rowA }, { name: 'Offices board', diversity: 0.8 }));
+cable('MB', 'DB2', 'Sub-main to offices', 28, 16, {
+  construction: 'armouredMulticore',
+  insulation: 'thermosetting90',
+  phases: 1,
+  cpc: armour(36),
+  device: { type: 'mcb', curve: 'C', ratingA: 50, breakingKa: 10 },
+  installation: clipped,
+});
+const rowB = 540;
+const off: [LoadSpec, number, number, Device][] = [
+  [{ name: 'Office lights', kind: 'lighting', kw: 0.6, pf: 0.95, at: -260 }, 22, 1.5, mcb('B', 6)],
+  [
+    { name: 'Meeting room and corridor lights', kind: 'lighting', kw: 0.5, pf: 0.95, at: -130 },
+    30,
+    1.5,
+    mcb('B', 6),
+  ],
+  [
+    { name: 'Office sockets A', kind: 'sockets', amps: 16, pf: 0.95, df: 0.6, at: 0 },
+    24,
+    2.5,
+    mcb('B', 20, true),
+  ],
+  [
+    { name: 'Office sockets B', kind: 'sockets', amps: 16, pf: 0.95, df: 0.6, at: 130 },
+    29,
+    2.5,
+    mcb('B', 20, true),
+  ],
+  [{ name: 'Kitchen water heater', kind: 'waterHeating', kw: 3, pf: 1, at: 260 }, 12, 2.5, mcb('B', 16)],
+  [
+    { name: 'Kitchen sockets', kind: 'sockets', amps: 20, pf: 1, df: 0.7, at: 390 },
+    10,
+    2.5,
+    mcb('B', 20, true),
+  ],
+  [{ name: 'Office heat pump', kind: 'hvac', kw: 2.5, pf: 0.9, at: 520 }, 16, 2.5, mcb('C', 16)],
+  [{ name: 'Comms cabinet', kind: 'other', kw: 0.5, pf: 0.95, at: 650 }, 8, 2.5, mcb('B', 16, true)],
+];
+for (const [spec, len, size, dev] of off) {
+  const id = load('DB2', rowB, { ...spec, phase: 'L2' });
+  cable('DB2', id, spec.name, len, size, {
+    ...T_E,
+    sizeMm2: size,
+    cpc: teCpc(size),
+    device: dev,
+    installation: grouped(4),
+  });
+}
+
+// Finishing shop: a three-phase board.
+doc.nodes.push(newBoard('DB3', { x: 900, y: rowA }, { name: 'Finishing shop board', diversity: 0.9 }));
+cable('MB', 'DB3', 'Sub-main to finishing shop', 44, 16, {
+  ...SWA3,
+  cpc: armour(44),
+  device: { type: 'mccb', ratingA: 63, breakingKa: 25, irMultiple: 1, imMultiple: 10 },
+  installation: clipped,
+});
+const fin: [LoadSpec, number, Partial<Cable>, Device][] = [
+  [
+    { name: 'Spray booth extract fan', kind: 'motor', kw: 2.2, pf: 0.8, three: true, at: 800 },
+    12,
+    { ...SWA3, sizeMm2: 2.5, cpc: armour(19) },
+    mcb('C', 10),
+  ],
+  [
+    { name: 'Drying room heaters', kind: 'heating', kw: 9, pf: 1, three: true, at: 930 },
+    16,
+    { ...SWA3, sizeMm2: 2.5, cpc: armour(19) },
+    mcb('B', 20),
+  ],
+  [
+    { name: 'Finishing lights', kind: 'lighting', kw: 0.8, pf: 0.95, phase: 'L1', at: 1060 },
+    24,
+    { ...T_E, sizeMm2: 1.5, cpc: teCpc(1.5) },
+    mcb('B', 6),
+  ],
+  [
+    { name: 'Finishing sockets', kind: 'sockets', amps: 16, pf: 0.95, phase: 'L2', df: 0.7, at: 1190 },
+    26,
+    { ...T_E, sizeMm2: 2.5, cpc: teCpc(2.5) },
+    mcb('B', 20, true),
+  ],
+  [
+    { name: 'Sanding bench sockets', kind: 'sockets', amps: 16, pf: 0.95, phase: 'L3', df: 0.7, at: 1320 },
+    20,
+    { ...T_E, sizeMm2: 2.5, cpc: teCpc(2.5) },
+    mcb('B', 20, true),
+  ],
+  [
+    { name: 'Store cupboard lights', kind: 'lighting', kw: 0.2, pf: 0.95, phase: 'L3', at: 1450 },
+    18,
+    { ...T_E, sizeMm2: 1.5, cpc: teCpc(1.5) },
+    mcb('B', 6),
+  ],
+];
+for (const [spec, len, c, dev] of fin) {
+  const id = load('DB3', rowB, spec);
+  cable('DB3', id, spec.name, len, c.sizeMm2!, { ...c, device: dev, installation: grouped(4) });
+}
+
+// Timber store across the yard: 25 mm² buried to the yard junction, then 16 mm² along the wall.
+doc.nodes.push(newJunction('J1', { x: 1900, y: rowA }, { name: 'Yard junction box' }));
+cable('MB', 'J1', 'Yard sub-main (buried)', 72, 25, {
+  ...SWA3,
+  cpc: armour(60),
+  device: { type: 'fuseGG', ratingA: 63, breakingKa: 80 },
+  installation: {
+    method: 'buriedDuct',
+    ambientC: 20,
+    groupedCircuits: 1,
+    groupArrangement: 'bunched',
+    insulationFactor: 1,
+  },
+});
+doc.nodes.push(newBoard('DB4', { x: 1900, y: rowB }, { name: 'Timber store board' }));
+cable('J1', 'DB4', 'Yard sub-main (store wall)', 38, 16, { ...SWA3, cpc: armour(44), installation: clipped });
+const rowC = 740;
+const store: [LoadSpec, number, Partial<Cable>, Device][] = [
+  [
+    { name: 'Store lights', kind: 'lighting', kw: 0.6, pf: 0.95, phase: 'L1', at: 1600 },
+    30,
+    { ...T_E, sizeMm2: 1.5, cpc: teCpc(1.5) },
+    mcb('B', 6),
+  ],
+  [
+    { name: 'Store sockets', kind: 'sockets', amps: 16, pf: 0.95, phase: 'L2', df: 0.7, at: 1730 },
+    20,
+    { ...T_E, sizeMm2: 2.5, cpc: teCpc(2.5) },
+    mcb('B', 20, true),
+  ],
+  [
+    { name: 'Kiln heater', kind: 'heating', kw: 9, pf: 1, three: true, at: 1860 },
+    8,
+    { ...SWA3, sizeMm2: 4, cpc: armour(35) },
+    mcb('B', 20),
+  ],
+  [
+    { name: 'Van charge point', kind: 'evCharging', kw: 7.4, pf: 1, phase: 'L3', at: 1990 },
+    26,
+    {
+      construction: 'armouredMulticore',
+      insulation: 'thermosetting90',
+      phases: 1,
+      sizeMm2: 6,
+      cpc: armour(23),
+    },
+    mcb('B', 40, true),
+  ],
+  [
+    { name: 'Forklift charger', kind: 'other', kw: 3, pf: 0.95, phase: 'L1', at: 2120 },
+    14,
+    { ...T_E, sizeMm2: 2.5, cpc: teCpc(2.5) },
+    mcb('C', 16, true),
+  ],
+  [
+    { name: 'Yard floodlights (rear)', kind: 'lighting', kw: 0.8, pf: 0.9, phase: 'L2', at: 2250 },
+    44,
+    {
+      construction: 'armouredMulticore',
+      insulation: 'thermosetting90',
+      phases: 1,
+      sizeMm2: 1.5,
+      cpc: armour(14),
+    },
+    mcb('B', 6),
+  ],
+];
+for (const [spec, len, c, dev] of store) {
+  const id = load('DB4', rowC, spec);
+  cable('DB4', id, spec.name, len, c.sizeMm2!, { ...c, device: dev, installation: grouped(3) });
+}
+
+const text = serializeDocument(doc);
+const check = parseDocument(text);
+if (!check.ok) throw new Error(`demo is not a valid project:\n${check.errors.join('\n')}`);
+if (check.warnings.length > 0) throw new Error(`demo has warnings:\n${check.warnings.join('\n')}`);
+const target = fileURLToPath(new URL('../public/demo-project.json', import.meta.url));
+writeFileSync(target, text);
+console.log(`wrote ${target}: ${doc.nodes.length} nodes, ${doc.cables.length} cables`);

@@ -1,0 +1,56 @@
+/** Command-line arguments of `dropline`. */
+
+export type CliArgs =
+  | { command: 'help' }
+  | { command: 'check'; file: string; json: boolean; workingId: string | null }
+  | { command: 'error'; message: string };
+
+export const USAGE = `usage: dropline check FILE [--json] [--working ID]
+
+Checks a Dropline project file: solves it and prints, per load, its path, cumulative drop, limit
+and status; per cable, Ib, drop in V and % and the cumulative %; every finding; the cautions; the
+data set and limit profile used.
+
+options:
+  --json         print the full results as JSON for other programs (shape: docs/cli-json.md)
+  --working ID   print every working record behind one element's figures (a cable, board or load id)
+  --help         show this text
+
+exit status:
+  0  every load is within its limit and there is no error finding
+  1  a load is over its limit, or a check failed (any error finding)
+  2  the file could not be read or is not a valid project file, or the command line is wrong
+  3  internal error while solving (please report it with the file)`;
+
+/**
+ * @example
+ *   parseArgs(['check', 'site.json', '--working', 'C3']); // { command: 'check', file: 'site.json', json: false, workingId: 'C3' }
+ */
+export function parseArgs(argv: readonly string[]): CliArgs {
+  if (argv.length === 0 || argv.includes('--help') || argv.includes('-h') || argv[0] === 'help') {
+    return { command: 'help' };
+  }
+  const [command, ...rest] = argv;
+  if (command !== 'check')
+    return { command: 'error', message: `unknown command "${command}"; the command is "check"` };
+  let file: string | null = null;
+  let json = false;
+  let workingId: string | null = null;
+  for (let i = 0; i < rest.length; i++) {
+    const a = rest[i]!;
+    if (a === '--json') json = true;
+    else if (a === '--working') {
+      const id = rest[i + 1];
+      if (id === undefined || id.startsWith('--'))
+        return { command: 'error', message: '--working needs an element id, e.g. --working C3' };
+      workingId = id;
+      i++;
+    } else if (a.startsWith('--working=')) workingId = a.slice('--working='.length);
+    else if (a.startsWith('-')) return { command: 'error', message: `unknown option "${a}"` };
+    else if (file === null) file = a;
+    else return { command: 'error', message: `one file at a time; got "${file}" and "${a}"` };
+  }
+  if (file === null)
+    return { command: 'error', message: 'name the project file to check, e.g. dropline check site.json' };
+  return { command: 'check', file, json, workingId };
+}

@@ -1,0 +1,116 @@
+/**
+ * The CLI's logic, separate from the process so it can be tested in-process: arguments and a file
+ * reader in, text and an exit status out.
+ */
+import { readFileSync, statSync } from 'node:fs';
+import { parseDocument } from '../model/parseDocument.ts';
+import { MAX_TEXT_CHARS } from '../model/safeJson.ts';
+import type { ProjectDocument } from '../model/types.ts';
+import type { Results } from '../solver/results.ts';
+import { solve as realSolve } from '../solver/solve.ts';
+import { parseArgs, USAGE } from './args.ts';
+import { buildCliJson, cliJsonText } from './jsonOutput.ts';
+import { formatReport } from './report.ts';
+import { summarise } from './summary.ts';
+import { formatElementWorking, similarIds } from './working.ts';
+
+export interface CliIo {
+  stdout(text: string): void;
+  stderr(text: string): void;
+  /** Reads a file as UTF-8 text; throws with a Node error code when it cannot. */
+  readText(path: string): string;
+}
+
+export const nodeIo: CliIo = {
+  stdout: (t) => process.stdout.write(t),
+  stderr: (t) => process.stderr.write(t),
+  readText(path) {
+    // Refuse before reading: a multi-gigabyte file would exhaust memory before any check ran.
+    const st = statSync(path);
+    if (st.isDirectory()) throw Object.assign(new Error('is a directory'), { code: 'EISDIR' });
+    if (st.size > MAX_TEXT_CHARS * 4) throw Object.assign(new Error('too large'), { code: 'EFBIG' });
+    return readFileSync(path, 'utf8');
+  },
+};
+
+function readError(file: string, e: unknown): string {
+  const code = (e as { code?: string }).code;
+  const why =
+    code === 'ENOENT'
+      ? 'there is no such file'
+      : code === 'EACCES' || code === 'EPERM'
+        ? 'permission denied'
+        : code === 'EISDIR'
+          ? 'it is a directory, not a file'
+          : code === 'EFBIG'
+            ? `it is larger than the ${MAX_TEXT_CHARS / 1024 / 1024} MB Dropline opens`
+            : e instanceof Error
+              ? e.message
+              : String(e);
+  return `dropline: cannot read ${file}: ${why}\n`;
+}
+
+/**
+ * Runs `dropline` with the given arguments and returns the exit status.
+ *
+ * @example
+ *   const code = runCli(['check', 'public/demo-project.json'], nodeIo); // 0, 1, 2 or 3
+ */
+export function runCli(
+  argv: readonly string[],
+  io: CliIo,
+  solve: (doc: ProjectDocument) => Results = realSolve,
+): number {
+  const args = parseArgs(argv);
+  if (args.command === 'help') {
+    io.stdout(`${USAGE}\n`);
+    return 0;
+  }
+  if (args.command === 'error') {
+    io.stderr(`dropline: ${args.message}\n\n${USAGE}\n`);
+    return 2;
+  }
+
+  let text: string;
+  try {
+    text = io.readText(args.file);
+  } catch (e) {
+    io.stderr(readError(args.file, e));
+    return 2;
+  }
+  const parsed = parseDocument(text);
+  if (!parsed.ok) {
+    io.stderr(
+      `dropline: ${args.file} is not a valid project file:\n${parsed.errors.map((e) => `  - ${e}\n`).join('')}`,
+    );
+    return 2;
+  }
+  for (const w of parsed.warnings) io.stderr(`dropline: note: ${w}\n`);
+
+  let results: Results;
+  try {
+    results = solve(parsed.doc);
+  } catch (e) {
+    io.stderr(
+      `dropline: internal error while solving ${args.file}: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}\n`,
+    );
+    return 3;
+  }
+  const summary = summarise(results);
+
+  if (args.workingId !== null) {
+    const text = formatElementWorking(parsed.doc, results, args.workingId);
+    if (text === null) {
+      const near = similarIds(results, args.workingId);
+      io.stderr(
+        `dropline: no element "${args.workingId}" in ${args.file}${near.length ? `; ids that look alike: ${near.join(', ')}` : ''}\n`,
+      );
+      return 2;
+    }
+    io.stdout(text);
+    return summary.exitCode;
+  }
+  if (args.json) io.stdout(cliJsonText(buildCliJson(parsed.doc, results, args.file, summary)));
+  else io.stdout(formatReport(parsed.doc, results, args.file, summary));
+  return summary.exitCode;
+}
