@@ -79,9 +79,9 @@ export function attachProtection(doc: ProjectDocument, results: Results, catalog
   }
   const topo = buildTopology(doc, results);
   const u0 = supply.u0V;
-  const cables: Results['cables'] = { ...results.cables };
-  const nodes: Results['nodes'] = { ...results.nodes };
-  const loads: Results['loads'] = { ...results.loads };
+  // The drop results are objects with computed getters: spreading would lose them, so the
+  // protection fields are added to each object in place (solve builds fresh results every time).
+  const { cables, nodes, loads } = results;
   const acc = new Map<Id, Acc>();
   const ze = Math.max(0, supply.zeOhm);
   acc.set(supply.id, {
@@ -104,7 +104,7 @@ export function attachProtection(doc: ProjectDocument, results: Results, catalog
       }
     }
   };
-  const nodeProtection = (id: Id, a: Acc, checks: Check[], zsMax: number | null, testMax: number | null) => {
+  const nodeProtection = (a: Acc, checks: Check[], zsMax: number | null, testMax: number | null) => {
     const zsOhm = magnitude(a.zsHot);
     const p: NodeProtection = {
       zsOhm,
@@ -115,13 +115,14 @@ export function attachProtection(doc: ProjectDocument, results: Results, catalog
       earthFaultA: (CMIN * u0) / zsOhm,
       fault: faultLevel(a, u0),
       checks,
+      working: [],
     };
+    p.working.push(zsWorking(supply, p, a), pfcWorking(source.basis, p, u0));
     return p;
   };
   const supplyResult = nodes[supply.id];
   const supplyAcc = acc.get(supply.id)!;
-  if (supplyResult)
-    nodes[supply.id] = { ...supplyResult, protection: nodeProtection(supply.id, supplyAcc, [], null, null) };
+  if (supplyResult) supplyResult.protection = nodeProtection(supplyAcc, [], null, null);
 
   for (const cable of topo.order) {
     const up = acc.get(cable.from);
@@ -166,62 +167,46 @@ export function attachProtection(doc: ProjectDocument, results: Results, catalog
     checks.push(cpcCheck(cable, device, earthFaultA, fuses));
     tally(checks, cable.id);
     const izA = 'error' in cap ? null : cap.izA;
-    cables[cable.id] = {
-      ...cr,
-      protection: {
-        device,
-        deviceCableId: prot.cableId,
-        circuit,
-        itA: 'error' in cap ? null : cap.itA,
-        izA,
-        factors: 'error' in cap ? null : { ca: cap.ca, cg: cap.cg, ci: cap.ci },
-        capacityUse: izA ? cr.ibA / izA : null,
-        r1r2HotOhm: seg.r1r2HotOhm,
-        r1r2ColdOhm: seg.r1r2ColdOhm,
-        requiredTimeS: requiredS,
-        checks,
-      },
-      working: [...cr.working, ...('error' in cap ? [] : [cap.working]), r1r2Working(cable, seg)],
+    cr.protection = {
+      device,
+      deviceCableId: prot.cableId,
+      circuit,
+      itA: 'error' in cap ? null : cap.itA,
+      izA,
+      factors: 'error' in cap ? null : { ca: cap.ca, cg: cap.cg, ci: cap.ci },
+      capacityUse: izA ? cr.ibA / izA : null,
+      r1r2HotOhm: seg.r1r2HotOhm,
+      r1r2ColdOhm: seg.r1r2ColdOhm,
+      requiredTimeS: requiredS,
+      checks,
+      working: [...('error' in cap ? [] : [cap.working]), r1r2Working(cable, seg)],
     };
 
-    const zs = zsChecks(nodeName, zsOhm, device, requiredS ?? 5, supply, fuses);
-    const nodeChecks = zs.checks;
     const nr = nodes[cable.to];
     if (!nr) continue;
-    const protection = nodeProtection(cable.to, a, nodeChecks, zs.zsMaxOhm, zs.testZsMaxOhm);
-    const nodeWorking = [
-      ...nr.working,
-      zsWorking(supply, protection, a),
-      pfcWorking(source.basis, protection, u0),
-    ];
-    const updated = { ...nr, protection, working: nodeWorking };
-    nodes[cable.to] = updated;
+    const zs = zsChecks(nodeName, zsOhm, device, requiredS ?? 5, supply, fuses);
+    const nodeChecks = zs.checks;
+    nr.protection = nodeProtection(a, nodeChecks, zs.zsMaxOhm, zs.testZsMaxOhm);
     const lr = loads[cable.to];
-    if (lr) {
-      const load = { ...lr, protection, working: nodeWorking };
-      const ld = toNode?.kind === 'load' ? toNode : undefined;
-      const motor = ld?.motor ? motorStartFor(ld, results, topo, source, u0) : undefined;
+    const ld = toNode?.kind === 'load' ? toNode : undefined;
+    if (lr && ld?.motor) {
+      const motor = motorStartFor(ld, results, topo, source, u0);
       if (motor) {
-        load.motorStart = motor.result;
+        lr.motorStart = motor.result;
         nodeChecks.push(motor.check);
       }
-      loads[cable.to] = load;
-      nodes[cable.to] = load;
     }
     tally(nodeChecks, cable.to);
   }
 
   return {
     ...results,
-    cables,
-    nodes,
-    loads,
     findings,
     references: [...results.references, ...REFERENCES.filter((r) => !results.references.includes(r))],
     protection: {
       failedChecks: failed,
       unassessedChecks: unassessed,
-      balance: boardBalances(doc, { ...results, nodes }),
+      balance: boardBalances(doc, results),
       fuseDataSet: { id: fuses.id, title: fuses.title, source: fuses.source },
       capacityDataSets: [...new Set(tables.map((t) => t.title))],
     },

@@ -54,6 +54,8 @@ export interface CableProtection {
   /** Disconnection time required for the circuit this segment belongs to. */
   requiredTimeS: number | null;
   checks: Check[];
+  /** Working of Iz and R1 + R2 (each check carries its own working too). */
+  working: Working[];
 }
 
 export interface FaultLevel {
@@ -81,6 +83,8 @@ export interface NodeProtection {
   earthFaultA: number;
   fault: FaultLevel;
   checks: Check[];
+  /** Working of Zs and the prospective fault current. */
+  working: Working[];
 }
 
 export interface MotorStartResult {
