@@ -31,6 +31,7 @@ export function CautionsDialog() {
       title="Before you rely on these figures"
       testId="cautions-dialog"
       onClose={onClose}
+      closable={acknowledged}
       footer={
         <button type="button" className="dl-primary" onClick={dismiss} data-testid="cautions-ok">
           {acknowledged ? 'Close' : 'I understand'}

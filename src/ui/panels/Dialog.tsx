@@ -9,10 +9,12 @@ interface Props {
   children: ReactNode;
   footer?: ReactNode;
   wide?: boolean;
+  /** False hides the close button, for a dialog that must be answered (the first cautions). */
+  closable?: boolean;
 }
 
 /** A modal frame: a title, a body, a footer of actions; Escape and the backdrop close it. */
-export function Dialog({ title, testId, onClose, children, footer, wide }: Props) {
+export function Dialog({ title, testId, onClose, children, footer, wide, closable = true }: Props) {
   const box = useRef<HTMLDivElement>(null);
   useEffect(() => {
     const prev = document.activeElement as HTMLElement | null;
@@ -42,9 +44,11 @@ export function Dialog({ title, testId, onClose, children, footer, wide }: Props
       >
         <header className="dl-dialog-head">
           <h2 id={`${testId}-title`}>{title}</h2>
-          <button type="button" className="dl-close" onClick={onClose} aria-label="Close">
-            ×
-          </button>
+          {closable && (
+            <button type="button" className="dl-close" onClick={onClose} aria-label="Close">
+              ×
+            </button>
+          )}
         </header>
         <div className="dl-dialog-body">{children}</div>
         {footer && <footer className="dl-dialog-foot">{footer}</footer>}

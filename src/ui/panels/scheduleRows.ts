@@ -7,6 +7,7 @@ import type { Id, NodeElement, ProjectDocument } from '../../model/types.ts';
 import type { Results, Status } from '../../solver/results.ts';
 import type { Check, NodeProtection } from '../../solver/protection/protectionResults.ts';
 import { fmt } from './format.ts';
+import { LOAD_KIND_OPTIONS } from './options.ts';
 
 export type Cell = { sort: number | string | null; text: string };
 
@@ -156,7 +157,7 @@ export function loadSchedule(doc: ProjectDocument, results: Results): Schedule {
         status: r?.status ?? null,
         cells: {
           name: txt(l.name || l.id),
-          kind: txt(l.loadKind),
+          kind: txt(LOAD_KIND_OPTIONS.find((o) => o.value === l.loadKind)?.label ?? l.loadKind),
           fedFrom: txt(nameOf(nodes, feeder?.from)),
           demand: { sort: l.demand.value, text: `${fmt(l.demand.value)} ${l.demand.unit}` },
           phase: txt(l.phases === 3 ? '3-phase' : l.phase),
