@@ -1,0 +1,149 @@
+// Browser tests for the details panel, schedules, findings and dialogs, on the demo project.
+// Figures on screen are compared with the engine's own, solved here in Node from the same file.
+import { readFileSync } from 'node:fs';
+import { afterEach, beforeEach, expect, inject, test } from 'vitest';
+import type { Page } from 'playwright-core';
+import { openSession, screenshot, type Session } from './browser.ts';
+import { parseDocument } from '../../src/model/parseDocument.ts';
+import { solve } from '../../src/solver/solve.ts';
+import type { ProjectDocument } from '../../src/model/types.ts';
+
+function demo(): ProjectDocument {
+  const parsed = parseDocument(readFileSync('public/demo-project.json', 'utf8'));
+  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+  return parsed.doc;
+}
+
+/** Page object for the panels. */
+class Panels {
+  constructor(readonly page: Page) {}
+  async start() {
+    await this.page.goto(inject('baseUrl'));
+    await this.page.getByTestId('app').waitFor();
+    await this.page.getByTestId('cautions-dialog').waitFor();
+    await this.page.getByTestId('cautions-ok').click();
+  }
+  details() {
+    return this.page.getByTestId('details-panel');
+  }
+  async openSchedules() {
+    await this.page.getByRole('button', { name: 'Schedules', exact: true }).click();
+    await this.page.getByTestId('schedules-drawer').waitFor();
+  }
+  async pickRow(sheet: 'cables' | 'loads' | 'boards', id: string) {
+    await this.page.getByTestId(`sheet-${sheet}`).click();
+    await this.page.getByTestId(`schedule-${sheet}`).locator(`tr[data-row="${id}"]`).click();
+  }
+  async tab(name: 'inputs' | 'results' | 'working') {
+    await this.page.getByTestId(`details-tab-${name}`).click();
+  }
+}
+
+let s: Session;
+beforeEach(async () => {
+  s = await openSession();
+});
+afterEach(async () => {
+  await s.close();
+});
+
+test('cautions show at first start, are remembered once acknowledged, and stay reachable', async () => {
+  const ui = new Panels(s.page);
+  await ui.start();
+  await expect(s.page.getByTestId('cautions-dialog').count()).resolves.toBe(0);
+  await s.page.reload();
+  await s.page.getByTestId('app').waitFor();
+  await s.page.waitForTimeout(500);
+  await expect(s.page.getByTestId('cautions-dialog').count()).resolves.toBe(0);
+  await s.page.getByRole('button', { name: 'Cautions', exact: true }).click();
+  await expect(s.page.getByTestId('cautions-dialog').textContent()).resolves.toContain('design aid');
+  expect(s.errors).toEqual([]);
+});
+
+test('a schedule row selects the element; the details show the engine’s figures and its working', async () => {
+  const doc = demo();
+  const results = solve(doc);
+  const load = doc.nodes.find((n) => n.kind === 'load' && (results.loads[n.id]?.path.length ?? 0) >= 2)!;
+  const ui = new Panels(s.page);
+  await ui.start();
+  await ui.openSchedules();
+  await screenshot(s.page, 'panels-schedules');
+  await ui.pickRow('loads', load.id);
+  await expect(ui.details().getByTestId('details-title').textContent()).resolves.toBe(load.name);
+  await ui.tab('results');
+  const expected = `${results.loads[load.id]!.cumulativePct.value.toFixed(2)} % of U0`;
+  await expect(ui.details().getByTestId('figure-cumulative').first().textContent()).resolves.toBe(expected);
+  const points = ui.details().getByTestId('profile-point');
+  await expect(points.count()).resolves.toBe(results.loads[load.id]!.path.length + 1);
+  await screenshot(s.page, 'panels-load-results');
+  await ui.tab('working');
+  await ui.details().locator('[data-testid="working-list"] details summary').first().click();
+  const firstWorking = results.loads[load.id]!.working[0]!;
+  await expect(ui.details().getByTestId('working-list').textContent()).resolves.toContain(
+    firstWorking.formula,
+  );
+  await screenshot(s.page, 'panels-load-working');
+  expect(s.errors).toEqual([]);
+});
+
+test('a bad length is refused in place; a good one changes the cumulative drop to the engine’s value', async () => {
+  const doc = demo();
+  const results = solve(doc);
+  const cable = doc.cables.find(
+    (c) => results.cables[c.id] && doc.nodes.some((n) => n.id === c.to && n.kind === 'load'),
+  )!;
+  const ui = new Panels(s.page);
+  await ui.start();
+  await ui.openSchedules();
+  await ui.pickRow('cables', cable.id);
+  const length = ui.details().getByLabel('Route length (one way)');
+  await length.fill('long');
+  await length.press('Enter');
+  const alert = ui.details().getByRole('alert');
+  await expect(alert.textContent()).resolves.toContain('not a number');
+  await screenshot(s.page, 'panels-bad-length');
+  await expect(s.page.getByRole('button', { name: 'Undo' }).isDisabled()).resolves.toBe(true);
+
+  const newLength = cable.lengthM + 25;
+  await length.fill(String(newLength));
+  await length.press('Enter');
+  await expect(alert.count()).resolves.toBe(0);
+  const changed = {
+    ...doc,
+    cables: doc.cables.map((c) => (c.id === cable.id ? { ...c, lengthM: newLength } : c)),
+  };
+  const after = solve(changed).cables[cable.id]!.cumulativePct.value;
+  await ui.tab('results');
+  await expect(ui.details().getByTestId('figure-cumulative').textContent()).resolves.toBe(
+    `${after.toFixed(2)} % of U0`,
+  );
+  expect(s.errors).toEqual([]);
+});
+
+test('the findings list goes to an element; help lists the shortcuts; project details save', async () => {
+  const ui = new Panels(s.page);
+  await ui.start();
+  await s.page.getByRole('button', { name: /^Findings/ }).click();
+  const findings = s.page.getByTestId('findings-list');
+  await findings.waitFor();
+  await screenshot(s.page, 'panels-findings');
+  const go = findings.getByRole('button', { name: /^Go to/ });
+  if ((await go.count()) > 0) {
+    await go.first().click();
+    await expect(ui.details().getByTestId('details-title').count()).resolves.toBe(1);
+  }
+  await s.page.getByRole('button', { name: 'Help', exact: true }).click();
+  await expect(
+    s.page.getByTestId('help-overlay').locator('[data-shortcut]').count(),
+  ).resolves.toBeGreaterThan(5);
+  await screenshot(s.page, 'panels-help');
+  await s.page.keyboard.press('Escape');
+  await s.page.getByRole('button', { name: 'Project', exact: true }).click();
+  const rev = s.page.getByTestId('project-dialog').getByLabel('Revision');
+  await rev.fill('P2');
+  await s.page.getByTestId('project-save').click();
+  await expect(s.page.getByTestId('project-dialog').count()).resolves.toBe(0);
+  await s.page.getByRole('button', { name: 'Project', exact: true }).click();
+  await expect(s.page.getByTestId('project-dialog').getByLabel('Revision').inputValue()).resolves.toBe('P2');
+  expect(s.errors).toEqual([]);
+});
