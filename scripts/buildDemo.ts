@@ -38,6 +38,8 @@ doc.details = {
 const supply = doc.nodes[0]!;
 supply.name = 'Supply 100 A TP&N';
 supply.position = { x: 0, y: 0 };
+// Declared by the (invented) supply company for this rural pole-mounted transformer.
+if (supply.kind === 'supply') supply.pfcKa = 10;
 
 const T_E: Partial<Cable> = { construction: 'flatTwinEarth', insulation: 'thermoplastic70', phases: 1 };
 const SWA3: Partial<Cable> = { construction: 'armouredMulticore', insulation: 'thermosetting90', phases: 3 };
@@ -53,11 +55,11 @@ const grouped = (n: number): Installation => ({
   groupedCircuits: n,
   groupArrangement: 'singleLayer',
 });
-const mcb = (curve: 'B' | 'C' | 'D', ratingA: number, rcd = false): Device => ({
+const mcb = (curve: 'B' | 'C' | 'D', ratingA: number, rcd = false, breakingKa = 10): Device => ({
   type: rcd ? 'rcbo' : 'mcb',
   curve,
   ratingA,
-  breakingKa: 10,
+  breakingKa,
   ...(rcd ? { rcd: { type: 'A' as const, idnMa: 30 } } : {}),
 });
 const teCpc = (size: number) => ({
@@ -111,7 +113,7 @@ function load(board: string, row: number, spec: LoadSpec): string {
 }
 
 // Main board in the workshop, fed by 35 mm² single-core tails from the cut-out.
-doc.nodes.push(newBoard('MB', { x: 0, y: 160 }, { name: 'Main board (workshop)' }));
+doc.nodes.push(newBoard('MB', { x: 0, y: 160 }, { name: 'Main board (workshop)', diversity: 0.7 }));
 cable('S1', 'MB', 'Meter tails', 3, 35, {
   construction: 'singleCore',
   insulation: 'thermoplastic70',
@@ -131,7 +133,7 @@ const ws: [LoadSpec, number, Partial<Cable>, Device][] = [
     mcb('B', 10),
   ],
   [
-    { name: 'Workshop high-bay lights 2', kind: 'lighting', kw: 1.2, pf: 0.95, phase: 'L2', at: -1170 },
+    { name: 'Workshop high-bay lights 2', kind: 'lighting', kw: 1.2, pf: 0.95, phase: 'L3', at: -1170 },
     38,
     { ...T_E, sizeMm2: 1.5, cpc: teCpc(1.5) },
     mcb('B', 10),
@@ -139,13 +141,13 @@ const ws: [LoadSpec, number, Partial<Cable>, Device][] = [
   [
     { name: 'Bench sockets north', kind: 'sockets', amps: 20, pf: 0.95, phase: 'L1', df: 0.8, at: -1040 },
     26,
-    { ...T_E, sizeMm2: 4, cpc: teCpc(4) },
+    { ...T_E, sizeMm2: 6, cpc: teCpc(6) },
     mcb('B', 32, true),
   ],
   [
     { name: 'Bench sockets south', kind: 'sockets', amps: 20, pf: 0.95, phase: 'L3', df: 0.8, at: -910 },
     30,
-    { ...T_E, sizeMm2: 4, cpc: teCpc(4) },
+    { ...T_E, sizeMm2: 6, cpc: teCpc(6) },
     mcb('B', 32, true),
   ],
   [
@@ -164,7 +166,7 @@ const ws: [LoadSpec, number, Partial<Cable>, Device][] = [
     { name: 'Dust extractor', kind: 'motor', kw: 7.5, pf: 0.86, three: true, at: -520 },
     28,
     { ...SWA3, sizeMm2: 4, cpc: armour(35) },
-    mcb('D', 25),
+    mcb('C', 20),
   ],
   [
     { name: 'Compressor', kind: 'motor', kw: 3, pf: 0.82, three: true, at: -390 },
@@ -173,7 +175,7 @@ const ws: [LoadSpec, number, Partial<Cable>, Device][] = [
     mcb('C', 16),
   ],
   [
-    { name: 'Yard lights (front)', kind: 'lighting', kw: 0.4, pf: 0.9, phase: 'L2', at: -260 },
+    { name: 'Yard lights (front)', kind: 'lighting', kw: 0.4, pf: 0.9, phase: 'L1', at: -260 },
     46,
     {
       construction: 'armouredMulticore',
@@ -187,7 +189,11 @@ const ws: [LoadSpec, number, Partial<Cable>, Device][] = [
 ];
 for (const [spec, len, c, dev] of ws) {
   const id = load('MB', rowA, spec);
-  cable('MB', id, spec.name, len, c.sizeMm2!, { ...c, device: dev, installation: grouped(6) });
+  cable('MB', id, spec.name, len, c.sizeMm2!, {
+    ...c,
+    device: { ...dev, breakingKa: 15 },
+    installation: grouped(6),
+  });
 }
 for (const m of doc.nodes)
   if (m.kind === 'load' && m.loadKind === 'motor')
@@ -200,7 +206,7 @@ cable('MB', 'DB2', 'Sub-main to offices', 28, 16, {
   insulation: 'thermosetting90',
   phases: 1,
   cpc: armour(36),
-  device: { type: 'mcb', curve: 'C', ratingA: 50, breakingKa: 10 },
+  device: { type: 'fuseGG', ratingA: 63, breakingKa: 80 },
   installation: clipped,
 });
 const rowB = 540;
@@ -250,7 +256,7 @@ doc.nodes.push(newBoard('DB3', { x: 900, y: rowA }, { name: 'Finishing shop boar
 cable('MB', 'DB3', 'Sub-main to finishing shop', 44, 16, {
   ...SWA3,
   cpc: armour(44),
-  device: { type: 'mccb', ratingA: 63, breakingKa: 25, irMultiple: 1, imMultiple: 10 },
+  device: { type: 'fuseGG', ratingA: 63, breakingKa: 80 },
   installation: clipped,
 });
 const fin: [LoadSpec, number, Partial<Cable>, Device][] = [
@@ -333,7 +339,7 @@ const store: [LoadSpec, number, Partial<Cable>, Device][] = [
     mcb('B', 20),
   ],
   [
-    { name: 'Van charge point', kind: 'evCharging', kw: 7.4, pf: 1, phase: 'L3', at: 1990 },
+    { name: 'Van charge point', kind: 'evCharging', kw: 7, pf: 1, phase: 'L3', at: 1990 },
     26,
     {
       construction: 'armouredMulticore',
@@ -342,7 +348,7 @@ const store: [LoadSpec, number, Partial<Cable>, Device][] = [
       sizeMm2: 6,
       cpc: armour(23),
     },
-    mcb('B', 40, true),
+    mcb('B', 32, true),
   ],
   [
     { name: 'Forklift charger', kind: 'other', kw: 3, pf: 0.95, phase: 'L1', at: 2120 },
