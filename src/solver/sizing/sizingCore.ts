@@ -1,0 +1,121 @@
+/**
+ * Shared pieces of cable sizing: candidate sizes, resizing a cable (with its cpc), volume, and the
+ * verdict of a full solve on the checks sizing claims to pass.
+ */
+import type { Cable, Id, ProjectDocument } from '../../model/types.ts';
+import { FLAT_TWIN_EARTH_CPC_MM2 } from '../../model/defaults.ts';
+import { sizesWithCapacity } from '../../catalogue/capacityTables.ts';
+import { resistance20OhmPerM } from '../../catalogue/iec60228.ts';
+import { BUILT_IN_CAPACITY_TABLES } from '../../catalogue/capacityTables.ts';
+import type { Results } from '../results.ts';
+
+/** A proposed change, plain data for the editor to apply as an undoable command. */
+export interface SizeChange {
+  cableId: Id;
+  field: 'sizeMm2' | 'cpc.sizeMm2';
+  from: number;
+  to: number;
+  reason: string;
+}
+
+/** The checks a sizing claims to pass: capacity, overload, cpc withstand, Zs and drop. */
+export const SIZING_CHECKS = ['inIz', 'i2', 'cpc', 'zs', 'drop'] as const;
+
+export interface SizingOptions {
+  /** Share of each load's drop limit given to distribution circuits on its path (fixed split). */
+  distributionShare: number;
+}
+
+export const DEFAULT_SIZING: SizingOptions = { distributionShare: 0.4 };
+
+/** Sizes a cable may take: the capacity tables cover them and IEC 60228 lists their resistance. */
+export function candidateSizes(cable: Cable): number[] {
+  const loaded = cable.phases === 3 ? 3 : 2;
+  const method = cable.installation?.method ?? 'clippedDirect';
+  return sizesWithCapacity(
+    {
+      material: cable.material,
+      insulation: cable.insulation,
+      construction: cable.construction,
+      method,
+      loaded,
+    },
+    BUILT_IN_CAPACITY_TABLES,
+  ).filter((s) => resistance20OhmPerM(cable.material, s) !== undefined);
+}
+
+/** The cable at another size; a full-size core cpc and the flat twin-and-earth pairing follow the line size. */
+export function resized(cable: Cable, sizeMm2: number): Cable {
+  let cpcMm2 = cable.cpc.sizeMm2;
+  if (cable.construction === 'flatTwinEarth' && FLAT_TWIN_EARTH_CPC_MM2[sizeMm2] !== undefined) {
+    cpcMm2 = FLAT_TWIN_EARTH_CPC_MM2[sizeMm2]!;
+  } else if (cable.cpc.kind === 'core' && cable.cpc.sizeMm2 === cable.sizeMm2) {
+    cpcMm2 = sizeMm2;
+  }
+  return { ...cable, sizeMm2, cpc: { ...cable.cpc, sizeMm2: cpcMm2 } };
+}
+
+export function withSizes(doc: ProjectDocument, sizes: ReadonlyMap<Id, number>): ProjectDocument {
+  return {
+    ...doc,
+    cables: doc.cables.map((c) => {
+      const s = sizes.get(c.id);
+      return s === undefined || s === c.sizeMm2 ? c : resized(c, s);
+    }),
+  };
+}
+
+/** Conductor volume of a cable: line cross-section x route length x parallel cables, mm² m. */
+export function volumeMm2M(cable: Cable, sizeMm2 = cable.sizeMm2): number {
+  return sizeMm2 * cable.lengthM * Math.max(1, cable.parallel);
+}
+
+export function totalVolume(doc: ProjectDocument): number {
+  let v = 0;
+  for (const c of doc.cables) v += volumeMm2M(c);
+  return v;
+}
+
+/** Element ids failing a claimed check in a solve: cables (capacity, cpc) and nodes (Zs, drop). */
+export function failingSizingChecks(results: Results): { id: Id; key: string }[] {
+  const out: { id: Id; key: string }[] = [];
+  for (const cr of Object.values(results.cables)) {
+    for (const c of cr.protection?.checks ?? []) {
+      if (c.pass === false && (c.key === 'inIz' || c.key === 'i2' || c.key === 'cpc'))
+        out.push({ id: cr.id, key: c.key });
+    }
+  }
+  for (const nr of Object.values(results.nodes)) {
+    for (const c of nr.protection?.checks ?? [])
+      if (c.pass === false && c.key === 'zs') out.push({ id: nr.id, key: 'zs' });
+  }
+  for (const lr of Object.values(results.loads))
+    if (lr.status === 'over') out.push({ id: lr.id, key: 'drop' });
+  return out;
+}
+
+/** Changes that turn one document's sizes into another's. */
+export function diffSizes(
+  before: ProjectDocument,
+  after: ProjectDocument,
+  reason: (c: Cable) => string,
+): SizeChange[] {
+  const byId = new Map(before.cables.map((c) => [c.id, c]));
+  const out: SizeChange[] = [];
+  for (const c of after.cables) {
+    const b = byId.get(c.id);
+    if (!b) continue;
+    if (b.sizeMm2 !== c.sizeMm2)
+      out.push({ cableId: c.id, field: 'sizeMm2', from: b.sizeMm2, to: c.sizeMm2, reason: reason(c) });
+    if (b.cpc.sizeMm2 !== c.cpc.sizeMm2) {
+      out.push({
+        cableId: c.id,
+        field: 'cpc.sizeMm2',
+        from: b.cpc.sizeMm2,
+        to: c.cpc.sizeMm2,
+        reason: 'follows the line conductor size',
+      });
+    }
+  }
+  return out;
+}
