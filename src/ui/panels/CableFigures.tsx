@@ -21,9 +21,9 @@ export function CableFigures({ id, results }: { id: Id; doc: ProjectDocument; re
         <dt>Current per conductor</dt>
         <dd>{currentsText(r.currentsA)}</dd>
         <dt>Resistance per conductor (hot)</dt>
-        <dd>{fmtExact(r.rOhmPerM)} Ω/m</dd>
+        <dd>{fmtExact(r.rOhmPerM * 1000)} mΩ/m</dd>
         <dt>Reactance per conductor</dt>
-        <dd>{fmtExact(r.xOhmPerM)} Ω/m</dd>
+        <dd>{fmtExact(r.xOhmPerM * 1000)} mΩ/m</dd>
         <dt>Drop in this segment</dt>
         <dd data-testid="figure-drop">
           {fmt(r.dropV)} V · {fmtPct(r.dropPct)}

@@ -83,11 +83,16 @@ export function DetailsPanel() {
       ? (results.loads[el.id] ?? results.nodes[el.id])?.status
       : results.cables[el.id]?.status;
     const result = node ? (results.loads[el.id] ?? results.nodes[el.id]) : results.cables[el.id];
-    // The drop working first, then the working behind each protection check.
-    const working: Working[] = [
-      ...(result?.working ?? []),
-      ...(result?.protection?.checks.map((c) => c.working) ?? []),
-    ];
+    // The drop working first, then loop impedance / capacity, then the working behind each check.
+    const sections: { title: string; working: Working[] }[] = [
+      { title: 'Current and voltage drop', working: result?.working ?? [] },
+      {
+        title: node ? 'Loop impedance and fault level' : 'Capacity and R1 + R2',
+        working: result?.protection?.working ?? [],
+      },
+      { title: 'Checks', working: result?.protection?.checks.map((c) => c.working) ?? [] },
+    ].filter((sec) => sec.working.length > 0);
+    const failed = result?.protection?.checks.filter((c) => c.pass === false).length ?? 0;
     const commitNode = (patch: object) => {
       const out = dispatch({ type: 'updateNode', id: el.id, patch });
       return out.ok ? undefined : out.error;
@@ -105,7 +110,14 @@ export function DetailsPanel() {
               {KIND_LABEL[kind]} · {el.id}
             </div>
           </div>
-          <StatusBadge status={status} />
+          <div style={{ display: 'flex', flexDirection: 'column', alignItems: 'flex-end', gap: 3 }}>
+            <StatusBadge status={status} />
+            {failed > 0 && (
+              <span className="dl-failed" data-testid="details-failed">
+                {failed} check{failed === 1 ? '' : 's'} fail{failed === 1 ? 's' : ''}
+              </span>
+            )}
+          </div>
         </header>
         <div className="dl-tabs" role="tablist" aria-label="Details">
           {TABS.map((t) => (
@@ -146,7 +158,17 @@ export function DetailsPanel() {
             ) : (
               <CableFigures id={el.id} doc={doc} results={results} />
             ))}
-          {tab === 'working' && <WorkingList working={working} />}
+          {tab === 'working' &&
+            (sections.length === 0 ? (
+              <WorkingList working={[]} />
+            ) : (
+              sections.map((sec) => (
+                <section key={sec.title}>
+                  <h3>{sec.title}</h3>
+                  <WorkingList working={sec.working} />
+                </section>
+              ))
+            ))}
         </div>
       </>
     );

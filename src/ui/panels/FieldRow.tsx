@@ -47,6 +47,7 @@ export function FieldRow<E, P>({ spec, element, owner, onCommit }: Props<E, P>) 
               </option>
             ))}
           </select>
+          <span className="dl-unit" />
         </div>
         {spec.hint && <div className="dl-hint">{spec.hint}</div>}
       </div>
@@ -128,7 +129,7 @@ function TypedField<E, P>({
           onBlur={commit}
           onKeyDown={onKey}
         />
-        {unit && <span className="dl-unit">{unit}</span>}
+        <span className="dl-unit">{unit}</span>
       </div>
       {reason ? (
         <div className="dl-reason" id={reasonId} role="alert">

@@ -93,22 +93,42 @@ export function VoltageProfile({ profile }: { profile: Profile }) {
               strokeWidth={1.6}
             />
             <text
-              x={x(p.distanceM) + (i === points.length - 1 ? -4 : 4)}
-              y={y(p.dropPct) + (i % 2 === 0 ? -6 : 12)}
+              x={x(p.distanceM) + (i === points.length - 1 ? -5 : 5)}
+              y={y(p.dropPct) - 5}
               textAnchor={i === points.length - 1 ? 'end' : 'start'}
-              style={{ fill: '#1e2931' }}
+              style={{ fill: '#1e2931', fontWeight: 600 }}
             >
-              {p.name}
+              {i + 1}
             </text>
-            <title>
-              {`${p.name}: ${fmt(p.distanceM, 0)} m from the origin, ${fmt(p.dropPct, 2)} % drop` +
-                (p.voltageV !== undefined ? `, ${fmt(p.voltageV, 1)} V` : '')}
-            </title>
+            <title>{`${i + 1}. ${p.name}`}</title>
           </g>
         ))}
       </svg>
+      <table className="dl-inputs" data-testid="profile-table">
+        <thead>
+          <tr className="dl-source">
+            <td>Node</td>
+            <td className="dl-num">From origin</td>
+            <td className="dl-num">Drop</td>
+            <td className="dl-num">Lowest V</td>
+          </tr>
+        </thead>
+        <tbody>
+          {points.map((p, i) => (
+            <tr key={p.nodeId}>
+              <td>
+                {i + 1}. {p.name}
+              </td>
+              <td className="dl-num">{fmt(p.distanceM, 0)} m</td>
+              <td className="dl-num">{fmt(p.dropPct, 2)} %</td>
+              <td className="dl-num">{p.voltageV === undefined ? '–' : `${fmt(p.voltageV, 1)} V`}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
       <figcaption className="dl-hint">
-        Points: cumulative drop the solver reports at each node. Dashed: the limit for this load.
+        Points: the cumulative drop the solver reports at each node along the route. Dashed: the limit for
+        this load.
       </figcaption>
     </figure>
   );
