@@ -9,7 +9,7 @@ import { useStore } from 'zustand';
 import type { Id, ProjectDocument } from '../model/types.ts';
 import type { Results } from '../solver/results.ts';
 import { applyCommand, type Command, type CommandResult } from '../model/commands.ts';
-import { emptyProject } from '../model/commands/localDefaults.ts';
+import { newProject } from '../model/defaults.ts';
 import { safeSolve } from './safeSolve.ts';
 import type { Dialog, DragPositions, Drawer, LabelMode, Notice, ViewState } from './viewTypes.ts';
 
@@ -38,6 +38,8 @@ export interface EditorState {
   fileName: string | null;
 
   dispatch(command: Command): CommandResult;
+  /** Loads a document without an undo step and with empty history (startup, recovery). */
+  resetDocument(doc: ProjectDocument, fileName?: string | null): void;
   undo(): void;
   redo(): void;
   setSelection(ids: Id[]): void;
@@ -71,7 +73,7 @@ function keepExisting(doc: ProjectDocument, ids: Id[]): Id[] {
   return ids.filter((id) => known.has(id));
 }
 
-export function createEditorStore(initial: ProjectDocument = emptyProject()): EditorStore {
+export function createEditorStore(initial: ProjectDocument = newProject()): EditorStore {
   let noticeSeq = 0;
   let revealSeq = 0;
   return createStore<EditorState>()((set, get) => ({
@@ -114,6 +116,20 @@ export function createEditorStore(initial: ProjectDocument = emptyProject()): Ed
         selection: nextSelection,
       });
       return out;
+    },
+
+    resetDocument(doc, fileName = null) {
+      set({
+        doc,
+        results: safeSolve(doc),
+        past: [],
+        future: [],
+        canUndo: false,
+        canRedo: false,
+        selection: [],
+        dragPositions: null,
+        fileName,
+      });
     },
 
     undo() {

@@ -1,14 +1,56 @@
-import { CAUTIONS } from '../model/cautions.ts';
+import { Canvas } from './canvas/Canvas.tsx';
+import { Tray } from './tray/Tray.tsx';
+import { TopBar } from './chrome/TopBar.tsx';
+import { NoticeBar } from './chrome/NoticeBar.tsx';
+import { FileProblemDialog } from './chrome/FileProblemDialog.tsx';
+import { StatusKey } from './chrome/StatusKey.tsx';
+import { LabelModeBar } from './chrome/LabelModeBar.tsx';
+import { useShortcuts } from './useShortcuts.ts';
+import { openFile } from './files/fileActions.ts';
+import { DetailsPanel } from './panels/DetailsPanel.tsx';
+import { SchedulesDrawer } from './panels/SchedulesDrawer.tsx';
+import { FindingsList } from './panels/FindingsList.tsx';
+import { ProjectDialog } from './panels/ProjectDialog.tsx';
+import { SettingsDialog } from './panels/SettingsDialog.tsx';
+import { CautionsDialog } from './panels/CautionsDialog.tsx';
+import { HelpOverlay } from './panels/HelpOverlay.tsx';
+
+function onWindowDragOver(e: React.DragEvent) {
+  if (e.dataTransfer.types.includes('Files')) {
+    e.preventDefault();
+    e.dataTransfer.dropEffect = 'copy';
+  }
+}
+
+function onWindowDrop(e: React.DragEvent) {
+  const file = e.dataTransfer.files?.[0];
+  if (!file) return;
+  e.preventDefault();
+  void openFile(file);
+}
 
 export function App() {
+  useShortcuts();
   return (
-    <main data-testid="app">
-      <h1>Dropline</h1>
-      <ul>
-        {CAUTIONS.map((c) => (
-          <li key={c}>{c}</li>
-        ))}
-      </ul>
+    <main className="ed-app" data-testid="app" onDragOver={onWindowDragOver} onDrop={onWindowDrop}>
+      <TopBar />
+      <div className="ed-body">
+        <Tray />
+        <div className="ed-centre">
+          <Canvas />
+          <LabelModeBar />
+          <StatusKey />
+          <NoticeBar />
+        </div>
+        <DetailsPanel />
+      </div>
+      <SchedulesDrawer />
+      <FindingsList />
+      <ProjectDialog />
+      <SettingsDialog />
+      <CautionsDialog />
+      <HelpOverlay />
+      <FileProblemDialog />
     </main>
   );
 }

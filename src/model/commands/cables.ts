@@ -1,8 +1,8 @@
 import type { Cable, Id, ProjectDocument } from '../types.ts';
 import { fail, ok, type CommandResult } from './result.ts';
 import { describeCable, describeNode } from './describe.ts';
-import { ID_PREFIX, nextId, usedIds } from './ids.ts';
-import { newCableFromDefaults } from './localDefaults.ts';
+import { nextIdFor, documentIds } from '../ids.ts';
+import { newCable } from '../defaults.ts';
 
 export type CablePatch = Partial<Omit<Cable, 'id'>>;
 
@@ -49,11 +49,17 @@ export function connectCable(
 ): CommandResult {
   const problem = connectionProblem(doc, from, to);
   if (problem) return fail(problem);
-  const taken = usedIds(doc);
-  if (id !== undefined && taken.has(id))
+  if (id !== undefined && documentIds(doc).includes(id)) {
     return fail(`Id ${id} is already used; pick another for the new cable.`);
-  const cableId = id ?? nextId(ID_PREFIX.cable, taken);
-  const cable: Cable = { ...newCableFromDefaults(doc, cableId, from, to), ...patch, id: cableId, from, to };
+  }
+  const cableId = id ?? nextIdFor(doc, 'cable');
+  const cable: Cable = {
+    ...newCable(cableId, from, to, doc.settings.cableDefaults),
+    ...patch,
+    id: cableId,
+    from,
+    to,
+  };
   return ok({ ...doc, cables: [...doc.cables, cable] }, [cableId]);
 }
 

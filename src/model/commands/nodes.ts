@@ -2,7 +2,7 @@ import type { Board, Id, Junction, Load, NodeElement, Position, ProjectDocument,
 import { fail, ok, type CommandResult } from './result.ts';
 import { describeNode } from './describe.ts';
 import { connectCable } from './cables.ts';
-import { usedIds } from './ids.ts';
+import { documentIds } from '../ids.ts';
 
 type Editable<T> = Partial<Omit<T, 'id' | 'kind'>>;
 
@@ -43,7 +43,7 @@ function finitePosition(p: Position): boolean {
 }
 
 export function addNode(doc: ProjectDocument, node: NodeElement, feedFrom?: Id): CommandResult {
-  const taken = usedIds(doc);
+  const taken = new Set(documentIds(doc));
   if (!node.id) return fail('A new element needs an id.');
   if (taken.has(node.id))
     return fail(`Id ${node.id} is already used; pick another for the new ${node.kind}.`);

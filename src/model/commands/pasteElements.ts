@@ -1,6 +1,6 @@
 import type { Cable, Id, NodeElement, Position, ProjectDocument } from '../types.ts';
 import { fail, ok, type CommandResult } from './result.ts';
-import { ID_PREFIX, nextId, usedIds } from './ids.ts';
+import { ID_PREFIX, documentIds, nextId } from '../ids.ts';
 
 /**
  * Adds copies of nodes and the cables between them with fresh ids. A cable whose ends are not both
@@ -15,7 +15,7 @@ export function pasteElements(
   if (nodes.length === 0) return fail('Nothing to paste: copy some elements first.');
   if (!Number.isFinite(offset.x) || !Number.isFinite(offset.y))
     return fail('Paste offset must be two finite numbers.');
-  const taken = usedIds(doc);
+  const taken = new Set(documentIds(doc));
   const renamed = new Map<Id, Id>();
   const newNodes = nodes.map((n) => {
     const id = nextId(ID_PREFIX[n.kind], taken);

@@ -1,0 +1,116 @@
+/**
+ * Editor actions shared by the top bar, keyboard shortcuts, context menu and tray. Each turns a
+ * user intent into store commands; none edits the document directly.
+ */
+import type { Id, Position } from '../model/types.ts';
+import { GRID, NODE_SIZE } from '../model/layout.ts';
+import { editorStore } from '../store/editorStore.ts';
+import { buildNode, type PartKind } from './parts.ts';
+import { copySelection, takeClip } from './clipboard.ts';
+import { canvas } from './canvasApi.ts';
+
+const store = editorStore;
+
+export function snap(p: Position): Position {
+  return { x: Math.round(p.x / GRID) * GRID, y: Math.round(p.y / GRID) * GRID };
+}
+
+/**
+ * Adds a part. Without a position it lands below the one selected board/junction/supply and is fed
+ * from it (the quick way to hang loads off a board), or else in the middle of the view.
+ */
+export function addPart(part: PartKind, at?: Position): void {
+  const s = store.getState();
+  let feedFrom: Id | undefined;
+  let position = at;
+  if (!position) {
+    const only = s.selection.length === 1 ? s.doc.nodes.find((n) => n.id === s.selection[0]) : undefined;
+    if (only && only.kind !== 'load' && part !== 'supply') {
+      feedFrom = only.id;
+      const fedAlready = s.doc.cables.filter((c) => c.from === only.id).length;
+      const size = NODE_SIZE[only.kind];
+      position = {
+        x: only.position.x + size.width / 2 - 48 + fedAlready * 128,
+        y: only.position.y + size.height + 112,
+      };
+    } else {
+      const c = canvas()?.viewCentre() ?? { x: 0, y: 0 };
+      position = { x: c.x - 48, y: c.y - 40 };
+    }
+  }
+  const node = buildNode(s.doc, part, snap(position));
+  const out = s.dispatch({ type: 'addNode', node, ...(feedFrom ? { feedFrom } : {}) });
+  // Loads hung off a board keep the board selected, so the next click hangs another one there;
+  // a new board or junction becomes the place to hang the next parts from.
+  if (out.ok) s.setSelection(feedFrom && node.kind === 'load' ? [feedFrom] : [node.id]);
+}
+
+export function deleteSelection(): void {
+  const s = store.getState();
+  if (s.selection.length > 0) s.dispatch({ type: 'deleteElements', ids: s.selection });
+}
+
+export function copy(): void {
+  const s = store.getState();
+  const n = copySelection(s.doc, s.selection);
+  if (n === 0) s.notify('Select one or more elements to copy.');
+}
+
+export function cut(): void {
+  const s = store.getState();
+  if (copySelection(s.doc, s.selection) > 0) deleteSelection();
+}
+
+export function paste(): void {
+  const s = store.getState();
+  const c = takeClip();
+  if (!c) {
+    s.notify('Nothing to paste: copy some elements first.');
+    return;
+  }
+  const step = GRID * 2 * c.step;
+  s.dispatch({ type: 'pasteElements', nodes: c.nodes, cables: c.cables, offset: { x: step, y: step } });
+}
+
+export function duplicate(): void {
+  const s = store.getState();
+  if (copySelection(s.doc, s.selection) > 0) paste();
+}
+
+export function selectAll(): void {
+  const { doc, setSelection } = store.getState();
+  setSelection([...doc.nodes.map((n) => n.id), ...doc.cables.map((c) => c.id)]);
+}
+
+export function nudge(dx: number, dy: number): void {
+  const s = store.getState();
+  const ids = new Set(s.selection);
+  const moves = s.doc.nodes
+    .filter((n) => ids.has(n.id))
+    .map((n) => ({ id: n.id, position: { x: n.position.x + dx, y: n.position.y + dy } }));
+  if (moves.length > 0) s.dispatch({ type: 'moveNodes', moves });
+}
+
+export function tidy(): void {
+  const out = store.getState().dispatch({ type: 'tidyLayout' });
+  if (out.ok) requestAnimationFrame(() => canvas()?.fitView());
+}
+
+/** Selects a load's path from the supply: its cables and the nodes along it. */
+export function selectPath(id: Id): void {
+  const s = store.getState();
+  const r = s.results.nodes[id];
+  if (!r || r.path.length === 0) {
+    s.notify('This element is not fed from a supply, so it has no path.');
+    return;
+  }
+  const nodes = new Set<Id>([id]);
+  for (const cid of r.path) {
+    const c = s.doc.cables.find((x) => x.id === cid);
+    if (c) {
+      nodes.add(c.from);
+      nodes.add(c.to);
+    }
+  }
+  s.setSelection([...nodes, ...r.path]);
+}

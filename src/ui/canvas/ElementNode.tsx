@@ -1,0 +1,81 @@
+import { memo } from 'react';
+import { Handle, Position, type NodeProps } from '@xyflow/react';
+import type { ElementFlowNode } from './flowTypes.ts';
+import { JunctionSymbol, LoadSymbol, SupplySymbol, TransformerSymbol, loadTitle } from './symbols.tsx';
+import { statusLook } from '../status.ts';
+import type { Status } from '../../solver/results.ts';
+
+function Badge({ status, label, detail }: { status: Status | null; label: string; detail: number }) {
+  const look = statusLook(status);
+  return (
+    <span
+      className={`ed-badge ed-badge-${status ?? 'none'}`}
+      style={{ color: look.colour, background: look.tint, borderColor: look.colour }}
+      title={`${look.word}: ${look.meaning}`}
+      data-testid="node-badge"
+    >
+      <span aria-hidden="true">{look.glyph}</span>
+      {detail > 0 && label ? (
+        <span className="ed-badge-text">{label}</span>
+      ) : (
+        <span className="ed-sr">{look.word}</span>
+      )}
+    </span>
+  );
+}
+
+function ElementNodeView({ data, selected }: NodeProps<ElementFlowNode>) {
+  const { element, status, label, detail, problem } = data;
+  const cls = `ed-node ed-node-${element.kind}${selected ? ' is-selected' : ''}${problem ? ' has-problem' : ''}`;
+  return (
+    <div
+      className={cls}
+      data-testid={`node-${element.id}`}
+      data-status={status ?? 'none'}
+      title={problem ?? element.name}
+    >
+      {element.kind !== 'supply' && (
+        <Handle type="target" position={Position.Top} id="in" className="ed-handle" />
+      )}
+      {element.kind === 'supply' && (
+        <>
+          <span className="ed-symbol">{element.transformer ? <TransformerSymbol /> : <SupplySymbol />}</span>
+          {detail > 0 && (
+            <span className="ed-side-text">
+              <strong>{element.name}</strong>
+              <span>
+                {element.phases === 3 ? '3~' : '1~'} {element.u0V} V {element.earthing}
+              </span>
+            </span>
+          )}
+        </>
+      )}
+      {element.kind === 'board' && (
+        <>
+          <span className="ed-busbar" />
+          <span className="ed-board-name">{detail > 0 ? element.name : ''}</span>
+          <Badge status={status} label={label} detail={detail} />
+        </>
+      )}
+      {element.kind === 'junction' && (
+        <span className="ed-symbol">
+          <JunctionSymbol size={16} />
+        </span>
+      )}
+      {element.kind === 'load' && (
+        <>
+          <span className="ed-symbol" aria-label={loadTitle(element.loadKind)}>
+            <LoadSymbol kind={element.loadKind} size={36} />
+          </span>
+          {detail > 0 && <span className="ed-load-name">{element.name}</span>}
+          <Badge status={status} label={label} detail={detail} />
+        </>
+      )}
+      {element.kind !== 'load' && (
+        <Handle type="source" position={Position.Bottom} id="out" className="ed-handle" />
+      )}
+    </div>
+  );
+}
+
+export const ElementNode = memo(ElementNodeView);

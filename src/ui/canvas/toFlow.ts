@@ -1,0 +1,181 @@
+/**
+ * Builds React Flow's nodes and edges from the document, the results, the selection and any drag
+ * in progress. The document stays the truth; these objects are views. Each builder keeps the
+ * previous objects and hands back the same one when nothing it shows has changed, so memoised node
+ * and edge components skip rendering (a drag then re-renders only what moves).
+ */
+import type { Id, NodeElement, Position, ProjectDocument } from '../../model/types.ts';
+import { NODE_SIZE } from '../../model/layout.ts';
+import type { Results } from '../../solver/results.ts';
+import type { LabelMode } from '../../store/viewTypes.ts';
+import { cableLabel, nodeLabel } from './labels.ts';
+import type { CableEdgeData, CableFlowEdge, Detail, ElementFlowNode, ElementNodeData } from './flowTypes.ts';
+import { Position as Side } from '@xyflow/react';
+
+export interface FlowInputs {
+  doc: ProjectDocument;
+  results: Results;
+  selection: Id[];
+  dragPositions: Record<Id, Position> | null;
+  labelMode: LabelMode;
+  showLabels: boolean;
+  detail: Detail;
+}
+
+const HANDLE = 10;
+
+function handlesFor(n: NodeElement): ElementFlowNode['handles'] {
+  const { width, height } = NODE_SIZE[n.kind];
+  const out: NonNullable<ElementFlowNode['handles']> = [];
+  if (n.kind !== 'supply') {
+    out.push({
+      id: 'in',
+      type: 'target',
+      position: Side.Top,
+      x: width / 2 - HANDLE / 2,
+      y: -HANDLE / 2,
+      width: HANDLE,
+      height: HANDLE,
+    });
+  }
+  if (n.kind !== 'load') {
+    out.push({
+      id: 'out',
+      type: 'source',
+      position: Side.Bottom,
+      x: width / 2 - HANDLE / 2,
+      y: height - HANDLE / 2,
+      width: HANDLE,
+      height: HANDLE,
+    });
+  }
+  return out;
+}
+
+function sameData(a: ElementNodeData, b: ElementNodeData): boolean {
+  return (
+    a.element === b.element &&
+    a.status === b.status &&
+    a.label === b.label &&
+    a.detail === b.detail &&
+    a.problem === b.problem
+  );
+}
+
+function sameEdgeData(a: CableEdgeData, b: CableEdgeData): boolean {
+  return (
+    a.cable === b.cable &&
+    a.status === b.status &&
+    a.detail === b.detail &&
+    a.showLabel === b.showLabel &&
+    a.lines.length === b.lines.length &&
+    a.lines.every((l, i) => l === b.lines[i])
+  );
+}
+
+export function createFlowBuilder() {
+  let nodeCache = new Map<Id, ElementFlowNode>();
+  let edgeCache = new Map<Id, CableFlowEdge>();
+
+  function problems(results: Results): Map<Id, string> {
+    const out = new Map<Id, string>();
+    for (const f of results.findings) {
+      if (f.elementId && f.severity === 'error' && !out.has(f.elementId)) out.set(f.elementId, f.message);
+    }
+    return out;
+  }
+
+  function nodes(input: FlowInputs): ElementFlowNode[] {
+    const { doc, results, dragPositions, labelMode, showLabels, detail } = input;
+    const selected = new Set(input.selection);
+    const issues = problems(results);
+    const next = new Map<Id, ElementFlowNode>();
+    const list = doc.nodes.map((element) => {
+      const r = results.nodes[element.id];
+      const data: ElementNodeData = {
+        element,
+        status: r?.status ?? null,
+        label: showLabels ? nodeLabel(r, labelMode) : '',
+        detail,
+        problem: issues.get(element.id) ?? null,
+      };
+      const position = dragPositions?.[element.id] ?? element.position;
+      const isSelected = selected.has(element.id);
+      const prev = nodeCache.get(element.id);
+      let node: ElementFlowNode;
+      if (prev && sameData(prev.data, data) && prev.selected === isSelected && prev.position === position) {
+        node = prev;
+      } else {
+        const size = NODE_SIZE[element.kind];
+        node = {
+          id: element.id,
+          type: 'element',
+          position,
+          data: prev && sameData(prev.data, data) ? prev.data : data,
+          selected: isSelected,
+          width: size.width,
+          height: size.height,
+          measured: { width: size.width, height: size.height },
+          handles: prev?.handles ?? handlesFor(element),
+          ariaLabel: `${element.kind} ${element.name}`,
+        };
+      }
+      next.set(element.id, node);
+      return node;
+    });
+    nodeCache = next;
+    return list;
+  }
+
+  function edges(input: FlowInputs): CableFlowEdge[] {
+    const { doc, results, labelMode, showLabels, detail } = input;
+    const selected = new Set(input.selection);
+    const next = new Map<Id, CableFlowEdge>();
+    const kinds = new Map(doc.nodes.map((n) => [n.id, n.kind]));
+    // A cable React Flow cannot draw (missing end, or starting at a load) stays out of the view;
+    // the solver reports it as a finding instead.
+    const drawable = doc.cables.filter((c) => {
+      const up = kinds.get(c.from);
+      const down = kinds.get(c.to);
+      return up !== undefined && down !== undefined && up !== 'load' && down !== 'supply';
+    });
+    const list = drawable.map((cable) => {
+      const r = results.cables[cable.id];
+      const data: CableEdgeData = {
+        cable,
+        status: r?.status ?? null,
+        lines: !showLabels
+          ? []
+          : cable.lengthM > 0
+            ? cableLabel(r, labelMode, results.nodes[cable.to])
+            : ['length not set'],
+        detail,
+        showLabel: showLabels && detail > 0,
+      };
+      const isSelected = selected.has(cable.id);
+      const prev = edgeCache.get(cable.id);
+      let edge: CableFlowEdge;
+      if (prev && prev.selected === isSelected && sameEdgeData(prev.data as CableEdgeData, data)) {
+        edge = prev;
+      } else {
+        edge = {
+          id: cable.id,
+          type: 'cable',
+          source: cable.from,
+          target: cable.to,
+          sourceHandle: 'out',
+          targetHandle: 'in',
+          data,
+          selected: isSelected,
+          ariaLabel: `cable ${cable.name}`,
+        };
+      }
+      next.set(cable.id, edge);
+      return edge;
+    });
+    edgeCache = next;
+    return list;
+  }
+
+  return { nodes, edges };
+}

@@ -1,0 +1,22 @@
+/**
+ * The few things outside the canvas (top bar, keyboard, tray) ask of the viewport. The canvas
+ * registers them when it mounts; until then they do nothing.
+ */
+import type { Position } from '../model/types.ts';
+
+export interface CanvasApi {
+  fitView(): void;
+  centreOn(position: Position): void;
+  /** Canvas coordinates of the middle of what is on screen, where a clicked tray part lands. */
+  viewCentre(): Position;
+}
+
+let api: CanvasApi | null = null;
+
+export function registerCanvas(next: CanvasApi | null): void {
+  api = next;
+}
+
+export function canvas(): CanvasApi | null {
+  return api;
+}
