@@ -12,7 +12,7 @@ import { fmt, working } from './protection/working.ts';
 /**
  * Dip in percent of U0 for a current drawn through a series impedance at a power factor:
  * ΔU ≈ I (R cos φ + X sin φ), the usual approximation for small dips.
- * @example dipPct(300, { rOhm: 0.1, xOhm: 0.02 }, 0.3, 230) // ≈ 4.4
+ * @example dipPct(300, { rOhm: 0.1, xOhm: 0.02 }, 0.3, 230) // ≈ 6.40
  */
 export function dipPct(currentA: number, z: Impedance, powerFactor: number, u0V: number): number {
   const sin = Math.sqrt(Math.max(0, 1 - powerFactor * powerFactor));
