@@ -46,11 +46,11 @@ export const supplySchema = z.strictObject({
   name: name(),
   position: positionSchema,
   phases: phaseCount,
-  u0V: z.number().positive().max(1000),
+  u0V: z.number().positive().max(1000).describe('Nominal line-to-neutral voltage U0, volts.'),
   earthing: z.enum(['TN-S', 'TN-C-S', 'TT']),
-  zeOhm: nonNegative(),
+  zeOhm: nonNegative().describe('External earth fault loop impedance Ze at the origin, ohms.'),
   zeSource: z.enum(['declared', 'measured']),
-  pfcKa: positive(),
+  pfcKa: positive().describe('Prospective fault current at the origin, kA.'),
   ownership: z.enum(['public', 'private']),
   transformer: transformerSchema.optional(),
   raOhm: nonNegative().optional(),
@@ -61,7 +61,7 @@ export const boardSchema = z.strictObject({
   id: idSchema,
   name: name(),
   position: positionSchema,
-  diversity: fraction(),
+  diversity: fraction().describe("Diversity applied to the board's outgoing demand, 0 to 1 (1 = none)."),
 });
 
 export const junctionSchema = z.strictObject({
@@ -98,7 +98,7 @@ export const loadSchema = z.strictObject({
   powerFactor: fraction(),
   phases: phaseCount,
   phase,
-  demandFactor: fraction(),
+  demandFactor: fraction().describe('Share of the connected demand taken as design demand, 0 to 1.'),
   motor: motorStartSchema.optional(),
 });
 
@@ -144,11 +144,11 @@ export const installationSchema = z.strictObject({
 
 const cableBody = {
   // Zero is allowed (a cable not yet measured); the solver reports it. Negative never is.
-  lengthM: nonNegative(),
+  lengthM: nonNegative().describe('One-way route length, metres (0 = not yet measured).'),
   material: z.enum(['Cu', 'Al']),
   insulation: z.enum(['thermoplastic70', 'thermosetting90']),
   construction: z.enum(['flatTwinEarth', 'multicore', 'armouredMulticore', 'singleCore']),
-  sizeMm2: positive(),
+  sizeMm2: positive().describe('Line conductor cross-section, mm².'),
   cpc: cpcSchema,
   phases: phaseCount,
   parallel: z.number().int().min(1).max(50),
@@ -159,8 +159,8 @@ const cableBody = {
 export const cableSchema = z.strictObject({
   id: idSchema,
   name: name(),
-  from: idSchema,
-  to: idSchema,
+  from: idSchema.describe('Id of the upstream node (towards the supply).'),
+  to: idSchema.describe('Id of the downstream node.'),
   ...cableBody,
 });
 
@@ -187,7 +187,11 @@ export const settingsSchema = z.strictObject({
     otherPct: z.number().positive().max(100),
   }),
   longRunAllowance: z.boolean(),
-  closeThreshold: z.number().positive().lt(1),
+  closeThreshold: z
+    .number()
+    .positive()
+    .lt(1)
+    .describe('Share of the drop budget above which a load is reported as close to its limit.'),
   designCurrentBasis: z.enum(['Ib', 'In']),
   dataSet: z.string().min(1).max(200),
   cableDefaults: cableDefaultsSchema,
