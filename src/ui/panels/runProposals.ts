@@ -40,7 +40,12 @@ export function runProposals(
         const set =
           kind === 'balance'
             ? phaseBalanceProposals(doc, results)
-            : sizingProposals(doc, results, (fraction, text) => report({ fraction, text }));
+            : sizingProposals(
+                doc,
+                results,
+                (fraction, text) => report({ fraction, text }),
+                () => cancelled,
+              );
         Promise.resolve(set).then((s) => {
           if (!cancelled) resolve(s);
         }, reject);

@@ -4,6 +4,7 @@ import { describe, expect, test } from 'vitest';
 import { SizingDialog } from '../../../../src/ui/panels/SizingDialog.tsx';
 import { editorStore } from '../../../../src/store/editorStore.ts';
 import { proposePhaseBalance } from '../../../../src/solver/balancePhases.ts';
+import { proposeTreeSizing } from '../../../../src/solver/sizing/proposeTreeSizing.ts';
 import { newCable, newLoad } from '../../../../src/model/defaults.ts';
 import type { Load } from '../../../../src/model/types.ts';
 import { loadIntoStore, smallNetwork } from './harness.ts';
@@ -57,6 +58,32 @@ describe('proposal review', () => {
 
     act(() => editorStore.getState().undo());
     for (const p of expected) expect(phaseOf(p.loadId)).toBe(p.from);
+  });
+
+  test("cable sizes: one row per cable from the engine's tree sizing, with its comparison, applied in full", async () => {
+    const doc = smallNetwork();
+    // A long lighting run, so sizing has something to propose.
+    doc.cables[2]!.lengthM = 90;
+    loadIntoStore(doc);
+    const expected = proposeTreeSizing(doc);
+    const cablesChanged = new Set(expected.changes.map((c) => c.cableId));
+    expect(cablesChanged.size).toBeGreaterThan(0);
+    act(() => editorStore.getState().openDialog('sizing'));
+    render(<SizingDialog />);
+    const table = await screen.findByTestId('proposals-table', {}, { timeout: 10000 });
+    expect([...table.querySelectorAll('tbody tr')].map((r) => r.getAttribute('data-proposal'))).toEqual(
+      [...cablesChanged].map((id) => `${id}.size`),
+    );
+    expect(screen.getByTestId('sizing-dialog').textContent).toContain(
+      `${expected.volumePerCableMm2M.toFixed(0)} mm²·m`,
+    );
+    fireEvent.click(screen.getByTestId('proposals-apply'));
+    const after = editorStore.getState().doc;
+    for (const ch of expected.changes) {
+      const cable = after.cables.find((c) => c.id === ch.cableId)!;
+      expect(ch.field === 'sizeMm2' ? cable.sizeMm2 : cable.cpc.sizeMm2).toBe(ch.to);
+    }
+    expect(editorStore.getState().past.length).toBe(1);
   });
 
   test('nothing ticked, nothing applied', async () => {
