@@ -14,6 +14,7 @@ import { ProjectDialog } from './panels/ProjectDialog.tsx';
 import { SettingsDialog } from './panels/SettingsDialog.tsx';
 import { CautionsDialog } from './panels/CautionsDialog.tsx';
 import { HelpOverlay } from './panels/HelpOverlay.tsx';
+import { SizingDialog } from './panels/SizingDialog.tsx';
 
 function onWindowDragOver(e: React.DragEvent) {
   if (e.dataTransfer.types.includes('Files')) {
@@ -50,6 +51,7 @@ export function App() {
       <SettingsDialog />
       <CautionsDialog />
       <HelpOverlay />
+      <SizingDialog />
       <FileProblemDialog />
     </main>
   );
