@@ -1,0 +1,158 @@
+/**
+ * Random radial networks for the benchmark: one supply, a few levels of boards, junctions and
+ * loads, single- and three-phase, with a seeded generator so every run measures the same trees.
+ */
+import type { Cable, NodeElement, ProjectDocument } from '../src/model/types.ts';
+import { baseSettings } from '../tests/fixtures/build.ts';
+
+/** Mulberry32: small, fast, seedable. */
+export function rng(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+const PHASES = ['L1', 'L2', 'L3'] as const;
+const FINAL_SIZES = [1.5, 2.5, 4, 6, 10];
+const MAIN_SIZES = [16, 25, 35, 50, 70, 95, 120, 150, 185, 240];
+
+/**
+ * About `elements` nodes plus cables (a tree of N nodes has N − 1 cables).
+ * Boards feed sub-boards and three-phase cables; loads hang on single-phase or three-phase cables.
+ */
+/**
+ * Sizes each three-phase feeder for the current below it (about 2 A/mm², 240 mm² cables in
+ * parallel beyond that), so the benchmark network is a plausible design, not a wall of findings.
+ */
+function sizeFeeders(nodes: NodeElement[], cables: Cable[]): void {
+  const demandA = new Map<string, number>();
+  for (const n of nodes)
+    if (n.kind === 'load')
+      demandA.set(n.id, (n.demand.value * 1000) / (230 * n.powerFactor) / (n.phases === 3 ? 1 : 3));
+  // Cables were created parent-first, so a reverse sweep sums children before parents.
+  for (let k = cables.length - 1; k >= 0; k--) {
+    const c = cables[k] as Cable;
+    const below = demandA.get(c.to) ?? 0;
+    demandA.set(c.from, (demandA.get(c.from) ?? 0) + below);
+    if (c.phases !== 3 || !c.to.startsWith('B')) continue;
+    const needMm2 = below / 2;
+    const size = MAIN_SIZES.find((s) => s >= needMm2);
+    if (size !== undefined) c.sizeMm2 = size;
+    else {
+      c.sizeMm2 = 240;
+      c.parallel = Math.min(100, Math.ceil(needMm2 / 240));
+    }
+  }
+}
+
+export function randomNetwork(elements: number, seed = 1): ProjectDocument {
+  const rand = rng(seed);
+  const nodeTarget = Math.max(2, Math.round((elements + 1) / 2));
+  const nodes: NodeElement[] = [];
+  const cables: Cable[] = [];
+  const pos = { x: 0, y: 0 };
+  nodes.push({
+    kind: 'supply',
+    id: 'S',
+    name: 'Supply',
+    position: pos,
+    phases: 3,
+    u0V: 230,
+    earthing: 'TN-C-S',
+    zeOhm: 0.2,
+    zeSource: 'declared',
+    pfcKa: 16,
+    ownership: 'public',
+  });
+  const boards: string[] = ['S'];
+  let c = 0;
+  const cable = (from: string, to: string, phases: 1 | 3, sizeMm2: number, lengthM: number): Cable => ({
+    id: `C${c++}`,
+    name: '',
+    from,
+    to,
+    lengthM,
+    material: 'Cu',
+    insulation: rand() < 0.5 ? 'thermoplastic70' : 'thermosetting90',
+    construction: phases === 3 ? 'armouredMulticore' : 'multicore',
+    sizeMm2,
+    cpc: { kind: 'core', sizeMm2: Math.min(sizeMm2, 16), material: 'Cu' },
+    phases,
+    parallel: 1,
+  });
+  const ways = new Map<string, number>();
+  while (nodes.length < nodeTarget) {
+    // A board takes at most 36 outgoing ways, like a real one; full boards stop taking more.
+    let from = boards[Math.floor(rand() * boards.length)] as string;
+    if ((ways.get(from) ?? 0) >= 36) from = boards[boards.length - 1] as string;
+    ways.set(from, (ways.get(from) ?? 0) + 1);
+    const k = nodes.length;
+    const roll = rand();
+    if (roll < 0.06 || boards.length < 3 || (ways.get(boards[boards.length - 1] as string) ?? 0) >= 36) {
+      const id = `B${k}`;
+      nodes.push({ kind: 'board', id, name: '', position: pos, diversity: 0.7 + 0.3 * rand() });
+      cables.push(
+        cable(from, id, 3, MAIN_SIZES[Math.floor(rand() * MAIN_SIZES.length)] as number, 5 + 30 * rand()),
+      );
+      boards.push(id);
+    } else if (roll < 0.1) {
+      const j = `J${k}`;
+      const id = `L${k + 1}`;
+      nodes.push({ kind: 'junction', id: j, name: '', position: pos });
+      cables.push(cable(from, j, 1, 10, 5 + 20 * rand()));
+      nodes.push(load(id, 1));
+      cables.push(cable(j, id, 1, 4, 5 + 20 * rand()));
+    } else {
+      const three = rand() < 0.15;
+      const id = `L${k}`;
+      nodes.push(load(id, three ? 3 : 1));
+      cables.push(
+        cable(
+          from,
+          id,
+          three ? 3 : 1,
+          FINAL_SIZES[Math.floor(rand() * FINAL_SIZES.length)] as number,
+          3 + 25 * rand(),
+        ),
+      );
+    }
+  }
+  sizeFeeders(nodes, cables);
+  function load(id: string, phases: 1 | 3): NodeElement {
+    return {
+      kind: 'load',
+      id,
+      name: '',
+      position: pos,
+      loadKind: 'other',
+      category: rand() < 0.3 ? 'lighting' : 'other',
+      demand: { value: 0.2 + 4 * rand(), unit: 'kW' },
+      powerFactor: 0.8 + 0.2 * rand(),
+      phases,
+      phase: PHASES[Math.floor(rand() * 3)] as (typeof PHASES)[number],
+      demandFactor: 0.5 + 0.5 * rand(),
+    };
+  }
+  return {
+    format: 'dropline-project',
+    version: 1,
+    details: {
+      title: 'Benchmark',
+      client: '',
+      site: '',
+      reference: '',
+      revision: '',
+      author: '',
+      date: '',
+      notes: '',
+    },
+    settings: baseSettings(),
+    nodes,
+    cables,
+  };
+}

@@ -1,0 +1,54 @@
+/**
+ * Stable finding codes of the drop solver. Views and tests match on `code`; messages name the
+ * element, the field and the fix, and may be reworded.
+ */
+import type { Finding } from './results.ts';
+
+export const FINDING_CODES = [
+  'malformedDocument',
+  'malformedElement',
+  'duplicateId',
+  'noSupply',
+  'manySupplies',
+  'unknownEnd',
+  'loop',
+  'island',
+  'fedTwice',
+  'feedsSupply',
+  'fromLoad',
+  'phaseMismatch',
+  'mixedPhases',
+  'phaseIgnored',
+  'badPhases',
+  'badLength',
+  'unknownSize',
+  'unknownConductor',
+  'badParallel',
+  'badDemand',
+  'badPowerFactor',
+  'badDemandFactor',
+  'badDiversity',
+  'badCategory',
+  'badVoltage',
+  'voltageMismatch',
+  'dataSetMismatch',
+  'notJudged',
+  'overLimit',
+  'closeToLimit',
+] as const;
+
+export type FindingCode = (typeof FINDING_CODES)[number];
+
+export interface DropFinding extends Finding {
+  code: FindingCode;
+}
+
+/** Printable form of any value a user typed, for "got ..." in messages. */
+export function shown(value: unknown): string {
+  if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
+  if (typeof value === 'number') return Number.isNaN(value) ? 'NaN' : String(value);
+  if (value === undefined) return 'nothing';
+  if (value === null) return 'null';
+  if (Array.isArray(value)) return 'a list';
+  return typeof value === 'object' ? 'an object' : String(value);
+}

@@ -1,0 +1,142 @@
+/**
+ * Limits, statuses and headroom. Each load is judged on its worst relevant phase against the
+ * limit for its category; boards, junctions and cables take the worst status below them. The
+ * headroom of a cable is its drop formula rearranged for length: with the same current and
+ * per-metre impedance, how long it could be before the first load below it reaches its limit.
+ */
+import { longRunAllowancePct } from '../catalogue/limits.ts';
+import type { DropState } from './dropState.ts';
+import { KIND_BOARD, KIND_LOAD } from './dropState.ts';
+import { shown } from './findings.ts';
+import { nodeLabel } from './topology.ts';
+
+export const STATUS_WORDS = ['within', 'close', 'over'] as const;
+
+/** Phases a load is judged on, as a bit mask. */
+export function loadPhaseMask(s: DropState, v: number): number {
+  const el = s.nodes[v] as { phases?: unknown; phase?: unknown };
+  if (el.phases === 3) return 7;
+  const singleSupply = s.root >= 0 && (s.nodes[s.root] as { phases?: unknown }).phases === 1;
+  if (singleSupply) return 1;
+  return el.phase === 'L2' ? 2 : el.phase === 'L3' ? 4 : 1;
+}
+
+export function judgeLoads(s: DropState): void {
+  const { findings, profile } = s;
+  const n = s.nodeCount;
+  const pctPerV = 100 / s.u0V;
+  const branchLimit = profile.branchPct;
+  const slack = new Float64Array(n * 3).fill(Infinity);
+  const slackB = branchLimit === undefined ? undefined : new Float64Array(n * 3).fill(Infinity);
+  const close = s.closeThreshold;
+
+  for (let k = s.orderLength - 1; k >= 0; k--) {
+    const v = s.order[k] as number;
+    const b = v * 3;
+    if (s.nodeKind[v] === KIND_LOAD) {
+      const mask = loadPhaseMask(s, v);
+      let worst = -1;
+      let worstPct = -Infinity;
+      let branchWorst = 0;
+      for (let p = 0; p < 3; p++) {
+        if (!(mask & (1 << p))) continue;
+        const pct = (s.cum[b + p] as number) * pctPerV;
+        if (pct > worstPct) {
+          worstPct = pct;
+          worst = p;
+        }
+        const br = ((s.cum[b + p] as number) - (s.branchBase[b + p] as number)) * pctPerV;
+        if (br > branchWorst) branchWorst = br;
+      }
+      const el = s.nodes[v] as { category?: unknown };
+      let category: 'lighting' | 'other' = 'lighting';
+      if (el.category === 'other' || el.category === 'lighting') category = el.category;
+      else
+        findings.push({
+          code: 'badCategory',
+          severity: 'warning',
+          elementId: s.nodeIds[v] as string,
+          message: `${nodeLabel(s, v)}: category must be lighting or other, got ${shown(el.category)}; it is judged against the stricter lighting limit.`,
+        });
+      const allowance =
+        profile.allowsLongRunAllowance && s.longRunAllowance
+          ? longRunAllowancePct(s.pathLengthM[v] as number)
+          : 0;
+      const limit = (profile.totalPct[category] ?? 3) + allowance;
+      let used = worstPct / limit;
+      if (branchLimit !== undefined) used = Math.max(used, branchWorst / branchLimit);
+      s.worstPhase[v] = worst;
+      s.loadCumPct[v] = worstPct;
+      s.loadLimitPct[v] = limit;
+      s.loadBranchPct[v] = branchWorst;
+      s.budgetUsed[v] = used;
+      if (s.incomplete[v] || !s.loadValid[v]) {
+        s.status[v] = -1;
+      } else {
+        const code = used > 1 ? 2 : used >= close ? 1 : 0;
+        s.status[v] = code;
+        for (let p = 0; p < 3; p++) {
+          if (!(mask & (1 << p))) continue;
+          const pct = (s.cum[b + p] as number) * pctPerV;
+          slack[b + p] = limit - pct;
+          if (slackB && branchLimit !== undefined)
+            slackB[b + p] =
+              branchLimit - ((s.cum[b + p] as number) - (s.branchBase[b + p] as number)) * pctPerV;
+        }
+        if (code === 2)
+          findings.push({
+            code: 'overLimit',
+            severity: 'error',
+            elementId: s.nodeIds[v] as string,
+            message: `${nodeLabel(s, v)}: drop from the origin ${worstPct.toFixed(2)} % of U0 is over its ${category} limit of ${limit.toFixed(2)} %${branchLimit !== undefined ? ` (or its branch drop ${branchWorst.toFixed(2)} % is over ${branchLimit} %)` : ''}; use a larger cable on the path or shorten it.`,
+          });
+        else if (code === 1)
+          findings.push({
+            code: 'closeToLimit',
+            severity: 'warning',
+            elementId: s.nodeIds[v] as string,
+            message: `${nodeLabel(s, v)}: uses ${(used * 100).toFixed(0)} % of its drop budget (${worstPct.toFixed(2)} % of U0 against ${limit.toFixed(2)} %).`,
+          });
+      }
+    }
+    const j = s.parentCable[v] as number;
+    if (v === s.root || j < 0) continue;
+    const u = s.cableFrom[j] as number;
+    if ((s.status[v] as number) > (s.status[u] as number)) s.status[u] = s.status[v] as number;
+    const ub = u * 3;
+    const isBoard = s.nodeKind[v] === KIND_BOARD;
+    for (let p = 0; p < 3; p++) {
+      if ((slack[b + p] as number) < (slack[ub + p] as number)) slack[ub + p] = slack[b + p] as number;
+      if (slackB && !isBoard && (slackB[b + p] as number) < (slackB[ub + p] as number))
+        slackB[ub + p] = slackB[b + p] as number;
+    }
+    headroom(s, j, v, slack, slackB, pctPerV);
+  }
+}
+
+function headroom(
+  s: DropState,
+  j: number,
+  v: number,
+  slack: Float64Array,
+  slackB: Float64Array | undefined,
+  pctPerV: number,
+): void {
+  if (s.cableBad[j]) return;
+  const mask = s.cablePhases[j] as number;
+  const b = v * 3;
+  const isBoard = s.nodeKind[v] === KIND_BOARD;
+  let factor = Infinity;
+  for (let p = 0; p < 3; p++) {
+    if (!(mask & (1 << p))) continue;
+    const d = (s.dropProj[j * 3 + p] as number) * pctPerV;
+    if (!(d > 0)) continue;
+    const a = slack[b + p] as number;
+    if (a !== Infinity) factor = Math.min(factor, (a + d) / d);
+    if (slackB && !isBoard) {
+      const c = slackB[b + p] as number;
+      if (c !== Infinity) factor = Math.min(factor, (c + d) / d);
+    }
+  }
+  if (factor !== Infinity) s.maxLengthM[j] = Math.max(0, (s.cableLengthM[j] as number) * factor);
+}
