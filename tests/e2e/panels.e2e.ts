@@ -79,7 +79,7 @@ test('a schedule row selects the element; the details show the engine’s figure
   await ui.tab('working');
   await ui.details().locator('[data-testid="working-list"] details summary').first().click();
   const firstWorking = results.loads[load.id]!.working[0]!;
-  await expect(ui.details().getByTestId('working-list').textContent()).resolves.toContain(
+  await expect(ui.details().getByTestId('working-list').first().textContent()).resolves.toContain(
     firstWorking.formula,
   );
   await screenshot(s.page, 'panels-load-working');

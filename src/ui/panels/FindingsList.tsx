@@ -1,12 +1,14 @@
 import { useEditor } from '../../store/editorStore.ts';
 import type { Severity } from '../../solver/results.ts';
+import { statusLook } from '../status.ts';
 import './panels.css';
 import './tables.css';
 
+// Same colours and glyphs as the status palette, so "over" and "must fix" read alike.
 const SEVERITY_LOOK: Record<Severity, { word: string; glyph: string; colour: string }> = {
-  error: { word: 'Must fix', glyph: '✖', colour: '#b23a00' },
-  warning: { word: 'Check', glyph: '▲', colour: '#9a5b00' },
-  info: { word: 'Note', glyph: 'i', colour: '#0a5f95' },
+  error: { word: 'Must fix', glyph: statusLook('over').glyph, colour: statusLook('over').colour },
+  warning: { word: 'Check', glyph: statusLook('close').glyph, colour: statusLook('close').colour },
+  info: { word: 'Note', glyph: 'i', colour: '#2c5f7c' },
 };
 const ORDER: Severity[] = ['error', 'warning', 'info'];
 

@@ -17,7 +17,12 @@ export function HelpOverlay() {
               {SHORTCUTS.map((s) => (
                 <tr key={s.id} data-shortcut={s.id}>
                   <td style={{ width: '42%' }}>
-                    <kbd>{s.keys}</kbd>
+                    {s.keys.split(' or ').map((k, i) => (
+                      <span key={k}>
+                        {i > 0 && <span className="dl-hint"> or </span>}
+                        <kbd>{k}</kbd>
+                      </span>
+                    ))}
                   </td>
                   <td>{s.what}</td>
                 </tr>
