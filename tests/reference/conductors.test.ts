@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { BUILTIN_CATALOGUE } from '../../src/catalogue/builtinConductors.ts';
 import { findConductor, mvPerAm } from '../../src/catalogue/conductorLookup.ts';
 import type { Construction, Insulation, Material } from '../../src/model/types.ts';
-import { agreesWithTable } from './tableTolerance.ts';
+import { agreesWithTable } from '../fixtures/tableTolerance.ts';
 
 function row(material: Material, insulation: Insulation, construction: Construction, size: number) {
   const r = findConductor(BUILTIN_CATALOGUE, material, insulation, construction, size);
