@@ -23,17 +23,35 @@ export function buildTopology(doc: ProjectDocument, results: Results): Topology 
   for (const n of doc.nodes) nodeById.set(n.id, n);
   const cableById = new Map<Id, Cable>();
   for (const c of doc.cables) cableById.set(c.id, c);
-  const buckets: Cable[][] = [];
-  const feeding = new Map<Id, Cable>();
+  // Breadth-first from the supply over the drawn cables: parents come before children without
+  // reading the drop results' paths (they are built on access, which would cost O(depth) each).
+  const incoming = new Map<Id, number>();
+  const children = new Map<Id, Cable[]>();
   for (const c of doc.cables) {
-    const path = results.nodes[c.to]?.path;
-    // Only cables on the node's own path are part of the fed tree (a second feed is a finding upstream).
-    if (!path || path.length === 0 || path[path.length - 1] !== c.id) continue;
-    (buckets[path.length] ??= []).push(c);
-    feeding.set(c.to, c);
+    incoming.set(c.to, (incoming.get(c.to) ?? 0) + 1);
+    const list = children.get(c.from);
+    if (list) list.push(c);
+    else children.set(c.from, [c]);
   }
+  const feeding = new Map<Id, Cable>();
   const order: Cable[] = [];
-  for (const b of buckets) if (b) order.push(...b);
+  const supply = doc.nodes.find((n) => n.kind === 'supply');
+  const seen = new Set<Id>(supply ? [supply.id] : []);
+  const queue: Id[] = supply ? [supply.id] : [];
+  for (let head = 0; head < queue.length; head++) {
+    for (const c of children.get(queue[head]!) ?? []) {
+      if (seen.has(c.to) || !results.nodes[c.to]) continue;
+      // A node fed twice is a finding of the drop solver; follow the feed its path uses.
+      if ((incoming.get(c.to) ?? 0) > 1) {
+        const path = results.nodes[c.to]!.path;
+        if (path[path.length - 1] !== c.id) continue;
+      }
+      seen.add(c.to);
+      feeding.set(c.to, c);
+      order.push(c);
+      queue.push(c.to);
+    }
+  }
 
   const protecting = new Map<Id, { device: Device | null; cableId: Id | null }>();
   for (const c of order) {
