@@ -1,12 +1,7 @@
 import { useMemo, useState } from 'react';
 import { useEditor } from '../../store/editorStore.ts';
-import {
-  boardSchedule,
-  cableSchedule,
-  loadSchedule,
-  ALL_STATUSES,
-  type StatusFilter,
-} from './scheduleRows.ts';
+import { boardSchedule, cableSchedule, loadSchedule } from './scheduleRows.ts';
+import { ALL_STATUSES, type StatusFilter } from './scheduleSort.ts';
 import { ScheduleTable } from './ScheduleTable.tsx';
 import { statusLook as lookOf } from '../status.ts';
 import './panels.css';

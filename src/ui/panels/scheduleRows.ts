@@ -3,7 +3,7 @@
  * raw value (for sorting) and its display text. No figure is computed here beyond picking the
  * solver's own values and the document's inputs.
  */
-import type { Id, NodeElement, ProjectDocument } from '../../model/types.ts';
+import type { Device, Id, NodeElement, ProjectDocument } from '../../model/types.ts';
 import type { Results, Status } from '../../solver/results.ts';
 import type { Check, NodeProtection } from '../../solver/protection/protectionResults.ts';
 import { fmt } from './format.ts';
@@ -63,7 +63,25 @@ function nodeProtectionCells(p: NodeProtection | undefined): Record<string, Cell
   };
 }
 
+// The IEC 60364-5-52 reference method letters, as a reviewer reads them in a schedule.
+const METHOD_SHORT: Record<string, string> = {
+  clippedDirect: 'C',
+  conduitOnWall: 'B',
+  conduitInInsulatedWall: 'A',
+  trayOrFreeAir: 'E/F',
+  buriedDirect: 'D2',
+  buriedDuct: 'D1',
+  inInsulation: 'in insulation',
+  aboveInsulation: 'on joist',
+};
+
 const DEVICE_SHORT: Record<string, string> = { mcb: 'MCB', rcbo: 'RCBO', fuseGG: 'gG fuse', mccb: 'MCCB' };
+
+function deviceShort(d: Device | undefined): string {
+  if (!d) return '–';
+  const curve = d.curve && (d.type === 'mcb' || d.type === 'rcbo') ? ` ${d.curve}` : '';
+  return `${DEVICE_SHORT[d.type] ?? d.type}${curve} ${d.ratingA} A${d.rcd ? ` + RCD ${d.rcd.idnMa} mA` : ''}`;
+}
 
 export function cableSchedule(doc: ProjectDocument, results: Results): Schedule {
   const nodes = new Map(doc.nodes.map((n) => [n.id, n]));
@@ -88,6 +106,10 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
       'R1+R2 Ω',
       'Line plus protective conductor resistance of the segment at operating temperature, ohms',
     ),
+    col('method', 'Method', 'Reference installation method', false),
+    col('ipfSend', 'Ipf send kA', 'Prospective fault current at the sending end, kA'),
+    col('zsEnd', 'Zs end Ω', 'Earth fault loop impedance at the receiving end, conductors hot, ohms'),
+    col('tReq', 't req s', 'Disconnection time required for the circuit, seconds'),
     col('fails', 'Failed', 'Protection checks this segment fails', false),
   ];
   const rows = doc.cables.map((c): Row => {
@@ -121,6 +143,15 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
         iz: num(p?.izA),
         use: num(p?.capacityUse === null || p?.capacityUse === undefined ? null : p.capacityUse * 100, 0),
         r1r2: num(p?.r1r2HotOhm, 3),
+        method: txt(c.installation ? (METHOD_SHORT[c.installation.method] ?? c.installation.method) : '–'),
+        ipfSend: num(
+          results.nodes[c.from]?.protection
+            ? results.nodes[c.from]!.protection!.fault.maxA / 1000
+            : undefined,
+          2,
+        ),
+        zsEnd: num(results.nodes[c.to]?.protection?.zsOhm, 3),
+        tReq: num(p?.requiredTimeS, 1),
         fails: failedChecks(p?.checks),
       },
     };
@@ -179,6 +210,7 @@ export function boardSchedule(doc: ProjectDocument, results: Results): Schedule 
     col('name', 'Board', 'Board or supply name', false),
     col('fedFrom', 'Fed from', 'Upstream node', false),
     col('cable', 'Incoming cable', 'Cable feeding the board', false),
+    col('incomer', 'Incoming device', 'Device at the sending end of the incoming cable', false),
     col('ways', 'Ways', 'Outgoing cables'),
     col('l1', 'L1 A', 'Demand current on L1, amperes'),
     col('l2', 'L2 A', 'Demand current on L2, amperes'),
@@ -209,6 +241,7 @@ export function boardSchedule(doc: ProjectDocument, results: Results): Schedule 
           name: txt(b.name || b.id),
           fedFrom: txt(b.kind === 'supply' ? 'origin' : nameOf(nodes, feeder?.from)),
           cable: txt(feeder ? feeder.name || feeder.id : '–'),
+          incomer: txt(deviceShort(feeder?.device)),
           ways: num(doc.cables.filter((c) => c.from === b.id).length, 0),
           l1: num(r?.currentsA.L1),
           l2: num(r?.currentsA.L2),
@@ -221,36 +254,4 @@ export function boardSchedule(doc: ProjectDocument, results: Results): Schedule 
       };
     });
   return { columns, rows };
-}
-
-const STATUS_RANK: Record<Status, number> = { within: 0, close: 1, over: 2 };
-
-export type SortOrder = { column: string; descending: boolean } | null;
-
-/** Sorted copy; empty cells always go last, whichever the direction. */
-export function sortRows(rows: Row[], order: SortOrder): Row[] {
-  if (!order) return rows;
-  const sign = order.descending ? -1 : 1;
-  const key = (r: Row) =>
-    order.column === 'status'
-      ? r.status
-        ? STATUS_RANK[r.status]
-        : null
-      : (r.cells[order.column]?.sort ?? null);
-  return rows.slice().sort((a, b) => {
-    const x = key(a);
-    const y = key(b);
-    if (x === null && y === null) return 0;
-    if (x === null) return 1;
-    if (y === null) return -1;
-    if (typeof x === 'number' && typeof y === 'number') return sign * (x - y);
-    return sign * String(x).localeCompare(String(y), undefined, { numeric: true });
-  });
-}
-
-export type StatusFilter = Record<Status | 'none', boolean>;
-export const ALL_STATUSES: StatusFilter = { within: true, close: true, over: true, none: true };
-
-export function filterRows(rows: Row[], filter: StatusFilter): Row[] {
-  return rows.filter((r) => filter[r.status ?? 'none']);
 }

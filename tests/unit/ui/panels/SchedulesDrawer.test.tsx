@@ -31,6 +31,11 @@ describe('schedules drawer', () => {
     expect(row.textContent).toContain(fmt(r.cables['C3']!.ibA));
     expect(row.textContent).toContain(r.cables['C3']!.cumulativePct.value.toFixed(2));
     expect(rowIds(table)).toEqual(['C1', 'C2', 'C3']);
+    // Cable schedule columns from the protection results: Iz of the segment, Zs at its far end.
+    const p = r.cables['C2']!.protection!;
+    const heaterRow = table.querySelector('tr[data-row="C2"]')!;
+    expect(heaterRow.textContent).toContain(fmt(p.izA));
+    expect(heaterRow.textContent).toContain(r.nodes['L1']!.protection!.zsOhm.toFixed(3));
 
     fireEvent.click(screen.getByRole('button', { name: /^Length m/ }));
     expect(rowIds(table)).toEqual(['C2', 'C1', 'C3']);
