@@ -66,6 +66,10 @@ export interface CableResult {
   maxLengthM: number | null;
   status: Status | null;
   working: Working[];
+  /** False where the cable is outside the solved tree or its own drop could not be computed. */
+  solved?: boolean;
+  /** Which case of the one phasor method applied (null when not solved). */
+  dropMethod?: 'singlePhaseLoop' | 'balancedThreePhase' | 'unbalancedThreePhase' | null;
   /** Device, capacity (Iz) and per-segment checks; added by attachProtection. */
   protection?: CableProtection;
 }
@@ -82,6 +86,10 @@ export interface NodeResult {
   currentsA: PhaseCurrents;
   status: Status | null;
   working: Working[];
+  /** False where nothing feeds the node from the supply. */
+  solved?: boolean;
+  /** Node voltage to neutral as a phasor (U0 at the phase angle minus the phasor drops). */
+  voltagePhasorV?: Partial<Record<Phase, { re: number; im: number }>>;
   /** Loop impedance Zs, prospective fault current and their checks; added by attachProtection. */
   protection?: NodeProtection;
 }
@@ -98,6 +106,8 @@ export interface LoadResult extends NodeResult {
   /** Fraction of the budget used (cumulative / limit). */
   budgetUsed: number;
   shares: PathShare[];
+  /** Drop of the branch circuit alone (from the last board upstream), where the profile limits it (NEC). */
+  branchDropPct?: Percent;
   /** Starting dip for a motor load; added by attachProtection. */
   motorStart?: MotorStartResult;
 }
