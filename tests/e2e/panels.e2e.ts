@@ -147,3 +147,25 @@ test('the findings list goes to an element; help lists the shortcuts; project de
   await expect(s.page.getByTestId('project-dialog').getByLabel('Revision').inputValue()).resolves.toBe('P2');
   expect(s.errors).toEqual([]);
 });
+
+test('sizing proposals are reviewed, applied in part as one step, and undone', async () => {
+  const ui = new Panels(s.page);
+  await ui.start();
+  await s.page.getByTestId('open-sizing').click();
+  const table = s.page.getByTestId('proposals-table');
+  await table.waitFor({ timeout: 60000 });
+  await screenshot(s.page, 'panels-sizing');
+  const rows = await table.locator('tbody tr').count();
+  expect(rows).toBeGreaterThan(1);
+  await table.locator('tbody tr input[type="checkbox"]').first().uncheck();
+  await expect(s.page.getByTestId('proposals-apply').textContent()).resolves.toBe(
+    `Apply ${rows - 1} of ${rows}`,
+  );
+  await s.page.getByTestId('proposals-apply').click();
+  await expect(s.page.getByTestId('sizing-dialog').count()).resolves.toBe(0);
+  const undo = s.page.getByRole('button', { name: 'Undo' });
+  await expect(undo.isEnabled()).resolves.toBe(true);
+  await undo.click();
+  await expect(undo.isDisabled()).resolves.toBe(true);
+  expect(s.errors).toEqual([]);
+});
