@@ -6,6 +6,8 @@ import type { Position } from '../model/types.ts';
 
 export interface CanvasApi {
   fitView(): void;
+  /** Zoom to 1:1 about the middle of the view. */
+  zoomActual(): void;
   centreOn(position: Position): void;
   /** Canvas coordinates of the middle of what is on screen, where a clicked tray part lands. */
   viewCentre(): Position;

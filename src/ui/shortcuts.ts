@@ -17,6 +17,7 @@ export type ShortcutId =
   | 'saveAs'
   | 'open'
   | 'fit'
+  | 'zoomActual'
   | 'tidy'
   | 'help'
   | 'escape';
@@ -51,6 +52,7 @@ export const SHORTCUTS: readonly Shortcut[] = [
   { id: 'saveAs', keys: `${SHIFT}${MOD}S`, what: 'Save as a new file' },
   { id: 'open', keys: `${MOD}O`, what: 'Open a project file' },
   { id: 'fit', keys: `${SHIFT}1`, what: 'Fit the diagram to the screen' },
+  { id: 'zoomActual', keys: `${SHIFT}0`, what: 'Zoom to 100 %' },
   { id: 'tidy', keys: `${SHIFT}T`, what: 'Tidy the layout from the supply down' },
   { id: 'help', keys: '?', what: 'Show this help' },
   { id: 'escape', keys: 'Esc', what: 'Clear the selection or close a dialog' },

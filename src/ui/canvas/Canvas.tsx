@@ -78,6 +78,7 @@ function FlowView() {
   useEffect(() => {
     registerCanvas({
       fitView: () => void flow.fitView({ padding: 0.12, maxZoom: 1.1, duration: 250 }),
+      zoomActual: () => void flow.zoomTo(1, { duration: 0 }),
       centreOn: (p) => void flow.setCenter(p.x, p.y, { zoom: Math.max(flow.getZoom(), 1), duration: 300 }),
       viewCentre: () => {
         const el = document.querySelector('.react-flow');
