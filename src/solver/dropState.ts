@@ -71,6 +71,8 @@ export interface DropState {
   loadCurrentA: Float64Array;
   loadPhiRad: Float64Array;
   loadValid: Uint8Array;
+  /** Phases a load draws from (7 for a three-phase load), 0 for non-loads. */
+  loadMask: Uint8Array;
   /** Effective diversity of a board (1 elsewhere or when invalid). */
   diversity: Float64Array;
 

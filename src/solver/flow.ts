@@ -11,40 +11,16 @@
  * cumulative drop is their sum and the voltage shown is U0 minus it.
  */
 import type { DropState } from './dropState.ts';
-import { KIND_BOARD, KIND_LOAD, PHASE_ANGLE, PHASE_COS, PHASE_SIN } from './dropState.ts';
-
-const PHASE_BIT: Record<string, number> = Object.assign(Object.create(null) as Record<string, number>, {
-  L1: 0,
-  L2: 1,
-  L3: 2,
-});
+import { KIND_BOARD, PHASE_COS, PHASE_SIN } from './dropState.ts';
 
 export function sumDemand(s: DropState): void {
   const { iRe, iIm, order } = s;
-  const singleSupply = s.root >= 0 && (s.nodes[s.root] as { phases?: unknown }).phases === 1;
+  // Load phasors were set by validateNodes; here they are summed from the leaves up.
   for (let k = s.orderLength - 1; k >= 0; k--) {
     const v = order[k] as number;
     const b = v * 3;
     const kind = s.nodeKind[v];
-    if (kind === KIND_LOAD) {
-      if (s.loadValid[v]) {
-        const amps = s.loadCurrentA[v] as number;
-        const phi = s.loadPhiRad[v] as number;
-        const el = s.nodes[v] as { phases?: unknown; phase?: unknown };
-        if (el.phases === 3) {
-          for (let p = 0; p < 3; p++) {
-            const a = (PHASE_ANGLE[p] as number) - phi;
-            iRe[b + p] = amps * Math.cos(a);
-            iIm[b + p] = amps * Math.sin(a);
-          }
-        } else {
-          const p = singleSupply ? 0 : (PHASE_BIT[el.phase as string] ?? 0);
-          const a = (PHASE_ANGLE[p] as number) - phi;
-          iRe[b + p] = amps * Math.cos(a);
-          iIm[b + p] = amps * Math.sin(a);
-        }
-      }
-    } else if (kind === KIND_BOARD) {
+    if (kind === KIND_BOARD) {
       const d = s.diversity[v] as number;
       if (d !== 1) {
         for (let p = 0; p < 3; p++) {
@@ -89,65 +65,61 @@ export function cableIbA(s: DropState, j: number): number {
   return ib;
 }
 
-export function segmentDrops(s: DropState): void {
+/** Drop of the cable `j` feeding node `v`, per phase carried. */
+function segmentDrop(s: DropState, v: number, j: number): void {
   const { iRe, iIm } = s;
-  for (let k = 1; k < s.orderLength; k++) {
-    const v = s.order[k] as number;
-    const j = s.parentCable[v] as number;
-    if (s.cableBad[j]) continue;
-    const mask = s.cablePhases[j] as number;
-    const b = v * 3;
-    // The currents the drop is computed with: demand, or scaled so the worst phase is In.
-    let scale = 1;
-    let atRating = 0;
-    const rating = deviceRatingA(s, j);
-    if (rating > 0) {
-      const ib = cableIbA(s, j);
-      if (ib > 0) scale = rating / ib;
-      else atRating = rating;
-    }
-    s.dropIScale[j] = atRating > 0 ? 0 : scale;
-    let jr0 = 0;
-    let ji0 = 0;
-    let jr1 = 0;
-    let ji1 = 0;
-    let jr2 = 0;
-    let ji2 = 0;
-    if (atRating > 0) {
-      if (mask & 1) jr0 = atRating;
-      if (mask & 2) {
-        jr1 = atRating * (PHASE_COS[1] as number);
-        ji1 = atRating * (PHASE_SIN[1] as number);
-      }
-      if (mask & 4) {
-        jr2 = atRating * (PHASE_COS[2] as number);
-        ji2 = atRating * (PHASE_SIN[2] as number);
-      }
-    } else {
-      if (mask & 1) {
-        jr0 = (iRe[b] as number) * scale;
-        ji0 = (iIm[b] as number) * scale;
-      }
-      if (mask & 2) {
-        jr1 = (iRe[b + 1] as number) * scale;
-        ji1 = (iIm[b + 1] as number) * scale;
-      }
-      if (mask & 4) {
-        jr2 = (iRe[b + 2] as number) * scale;
-        ji2 = (iIm[b + 2] as number) * scale;
-      }
-    }
-    const nr = jr0 + jr1 + jr2;
-    const ni = ji0 + ji1 + ji2;
-    s.nRe[j] = nr;
-    s.nIm[j] = ni;
-    const zr = s.cableZr[j] as number;
-    const zx = s.cableZx[j] as number;
-    const cb = j * 3;
-    if (mask & 1) drop(s, cb, 0, zr, zx, jr0 + nr, ji0 + ni);
-    if (mask & 2) drop(s, cb, 1, zr, zx, jr1 + nr, ji1 + ni);
-    if (mask & 4) drop(s, cb, 2, zr, zx, jr2 + nr, ji2 + ni);
+  const mask = s.cablePhases[j] as number;
+  const b = v * 3;
+  // The currents the drop is computed with: demand, or scaled so the worst phase is In.
+  let scale = 1;
+  let atRating = 0;
+  const rating = deviceRatingA(s, j);
+  if (rating > 0) {
+    const ib = cableIbA(s, j);
+    if (ib > 0) scale = rating / ib;
+    else atRating = rating;
   }
+  s.dropIScale[j] = atRating > 0 ? 0 : scale;
+  let jr0 = 0;
+  let ji0 = 0;
+  let jr1 = 0;
+  let ji1 = 0;
+  let jr2 = 0;
+  let ji2 = 0;
+  if (atRating > 0) {
+    if (mask & 1) jr0 = atRating;
+    if (mask & 2) {
+      jr1 = atRating * (PHASE_COS[1] as number);
+      ji1 = atRating * (PHASE_SIN[1] as number);
+    }
+    if (mask & 4) {
+      jr2 = atRating * (PHASE_COS[2] as number);
+      ji2 = atRating * (PHASE_SIN[2] as number);
+    }
+  } else {
+    if (mask & 1) {
+      jr0 = (iRe[b] as number) * scale;
+      ji0 = (iIm[b] as number) * scale;
+    }
+    if (mask & 2) {
+      jr1 = (iRe[b + 1] as number) * scale;
+      ji1 = (iIm[b + 1] as number) * scale;
+    }
+    if (mask & 4) {
+      jr2 = (iRe[b + 2] as number) * scale;
+      ji2 = (iIm[b + 2] as number) * scale;
+    }
+  }
+  const nr = jr0 + jr1 + jr2;
+  const ni = ji0 + ji1 + ji2;
+  s.nRe[j] = nr;
+  s.nIm[j] = ni;
+  const zr = s.cableZr[j] as number;
+  const zx = s.cableZx[j] as number;
+  const cb = j * 3;
+  if (mask & 1) drop(s, cb, 0, zr, zx, jr0 + nr, ji0 + ni);
+  if (mask & 2) drop(s, cb, 1, zr, zx, jr1 + nr, ji1 + ni);
+  if (mask & 4) drop(s, cb, 2, zr, zx, jr2 + nr, ji2 + ni);
 }
 
 function drop(s: DropState, cb: number, p: number, zr: number, zx: number, jr: number, ji: number): void {
@@ -174,6 +146,7 @@ export function accumulate(s: DropState): void {
     const ub = u * 3;
     const cb = j * 3;
     const board = s.nodeKind[v] === KIND_BOARD;
+    if (!s.cableBad[j]) segmentDrop(s, v, j);
     for (let p = 0; p < 3; p++) {
       const c = (cum[ub + p] as number) + (dropProj[cb + p] as number);
       cum[b + p] = c;

@@ -14,11 +14,7 @@ export const STATUS_WORDS = ['within', 'close', 'over'] as const;
 
 /** Phases a load is judged on, as a bit mask. */
 export function loadPhaseMask(s: DropState, v: number): number {
-  const el = s.nodes[v] as { phases?: unknown; phase?: unknown };
-  if (el.phases === 3) return 7;
-  const singleSupply = s.root >= 0 && (s.nodes[s.root] as { phases?: unknown }).phases === 1;
-  if (singleSupply) return 1;
-  return el.phase === 'L2' ? 2 : el.phase === 'L3' ? 4 : 1;
+  return (s.loadMask[v] as number) || 1;
 }
 
 export function judgeLoads(s: DropState): void {

@@ -9,12 +9,6 @@ import { KIND_LOAD } from './dropState.ts';
 import { shown } from './findings.ts';
 import { nodeLabel } from './topology.ts';
 
-const PHASE_BIT: Record<string, number> = Object.assign(Object.create(null) as Record<string, number>, {
-  L1: 1,
-  L2: 2,
-  L3: 4,
-});
-
 const BIT_NAME = ['', 'L1', 'L2', '', 'L3'];
 
 function bitCount(mask: number): number {
@@ -32,21 +26,18 @@ export function assignPhases(s: DropState): void {
   for (let k = s.orderLength - 1; k >= 0; k--) {
     const v = s.order[k] as number;
     if (s.nodeKind[v] === KIND_LOAD) {
-      const el = s.nodes[v] as unknown as Record<string, unknown>;
-      if (el.phases === 3) {
-        need[v] = 7;
-        has3[v] = 1;
-      } else if (el.phases === 1) {
-        const bit = PHASE_BIT[el.phase as string] ?? 1;
-        if (supplyMask === 1 && bit !== 1) {
+      const mask = s.loadMask[v] as number;
+      need[v] = mask;
+      if (mask === 7) has3[v] = 1;
+      else if (supplyMask === 1) {
+        const el = s.nodes[v] as unknown as Record<string, unknown>;
+        if (el.phases === 1 && el.phase !== 'L1')
           findings.push({
             code: 'phaseIgnored',
             severity: 'info',
             elementId: s.nodeIds[v] as string,
             message: `${nodeLabel(s, v)}: set to phase ${shown(el.phase)} but the supply is single-phase; it is solved on the supply's phase L1.`,
           });
-        }
-        need[v] = supplyMask === 1 ? 1 : bit;
       }
     }
     const pc = s.parentCable[v] as number;

@@ -25,7 +25,7 @@ import { shown } from './findings.ts';
 import { buildTopology, nodeLabel } from './topology.ts';
 import { validateCables, validateNodes } from './validateElements.ts';
 import { assignPhases } from './phases.ts';
-import { accumulate, segmentDrops, sumDemand } from './flow.ts';
+import { accumulate, sumDemand } from './flow.ts';
 import { judgeLoads } from './judge.ts';
 import { CableResultView, LoadResultView, NodeResultView } from './resultObjects.ts';
 import { lazyRecord } from './lazyRecord.ts';
@@ -121,6 +121,7 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
     loadCurrentA: new Float64Array(n),
     loadPhiRad: new Float64Array(n),
     loadValid: new Uint8Array(n),
+    loadMask: new Uint8Array(n),
     diversity: new Float64Array(n).fill(1),
     iRe: new Float64Array(n * 3),
     iIm: new Float64Array(n * 3),
@@ -267,7 +268,6 @@ export function solveDrop(doc: ProjectDocument, catalogue?: CatalogueSet): Resul
     validateCables(s);
     assignPhases(s);
     sumDemand(s);
-    segmentDrops(s);
     accumulate(s);
     judgeLoads(s);
     return buildResults(s);

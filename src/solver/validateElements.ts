@@ -6,7 +6,7 @@
  */
 import { findConductor, sizesFor } from '../catalogue/conductorLookup.ts';
 import type { DropState } from './dropState.ts';
-import { KIND_BOARD, KIND_LOAD } from './dropState.ts';
+import { KIND_BOARD, KIND_LOAD, PHASE_ANGLE } from './dropState.ts';
 import { shown } from './findings.ts';
 import { nodeLabel } from './topology.ts';
 
@@ -87,6 +87,7 @@ const UNIT_OK: Record<string, true> = Object.assign(Object.create(null) as Recor
 export function validateNodes(s: DropState): void {
   const { findings } = s;
   const sqrt3 = Math.sqrt(3);
+  const singleSupply = s.root >= 0 && (s.nodes[s.root] as unknown as Loose).phases === 1;
   for (let k = 0; k < s.orderLength; k++) {
     const i = s.order[k] as number;
     const kind = s.nodeKind[i];
@@ -105,6 +106,8 @@ export function validateNodes(s: DropState): void {
       continue;
     }
     if (kind !== KIND_LOAD) continue;
+    const declared = el.phases === 3 ? 7 : el.phase === 'L2' ? 2 : el.phase === 'L3' ? 4 : 1;
+    s.loadMask[i] = singleSupply && declared !== 7 ? 1 : declared;
     const demand = el.demand as Loose | undefined;
     const value = typeof demand === 'object' && demand !== null ? demand.value : undefined;
     const unit = typeof demand === 'object' && demand !== null ? demand.unit : undefined;
@@ -128,9 +131,19 @@ export function validateNodes(s: DropState): void {
     if (unit === 'A') amps = v;
     else if (unit === 'kVA') amps = (v * 1000) / volts;
     else amps = ((unit === 'kW' ? v * 1000 : v) as number) / (volts * cosPhi);
-    s.loadCurrentA[i] = amps * (df as number);
-    s.loadPhiRad[i] = Math.acos(cosPhi);
+    const current = amps * (df as number);
+    const phi = Math.acos(cosPhi);
+    s.loadCurrentA[i] = current;
+    s.loadPhiRad[i] = phi;
     s.loadValid[i] = 1;
+    // The load's own current phasors, lagging each phase voltage by φ.
+    const mask = s.loadMask[i] as number;
+    for (let p = 0; p < 3; p++) {
+      if (!(mask & (1 << p))) continue;
+      const a = (PHASE_ANGLE[p] as number) - phi;
+      s.iRe[i * 3 + p] = current * Math.cos(a);
+      s.iIm[i * 3 + p] = current * Math.sin(a);
+    }
   }
 }
 
