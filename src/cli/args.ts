@@ -2,10 +2,10 @@
 
 export type CliArgs =
   | { command: 'help' }
-  | { command: 'check'; file: string; json: boolean; workingId: string | null }
+  | { command: 'check'; file: string; json: boolean; workingId: string | null; dataFile: string | null }
   | { command: 'error'; message: string };
 
-export const USAGE = `usage: dropline check FILE [--json] [--working ID]
+export const USAGE = `usage: dropline check FILE [--json] [--working ID] [--data TABLE]
 
 Checks a Dropline project file: solves it and prints, per load, its path, cumulative drop, limit
 and status; per cable, Ib, drop in V and % and the cumulative %; every finding; the cautions; the
@@ -14,6 +14,8 @@ data set and limit profile used.
 options:
   --json         print the full results as JSON for other programs (shape: docs/cli-json.md)
   --working ID   print every working record behind one element's figures (a cable, board or load id)
+  --data TABLE   use your own conductor data set (CSV or JSON, shape: docs/catalogue-data.md) instead
+                 of the built-in one; the report and every working record name it
   --help         show this text
 
 exit status:
@@ -36,6 +38,7 @@ export function parseArgs(argv: readonly string[]): CliArgs {
   let file: string | null = null;
   let json = false;
   let workingId: string | null = null;
+  let dataFile: string | null = null;
   for (let i = 0; i < rest.length; i++) {
     const a = rest[i]!;
     if (a === '--json') json = true;
@@ -46,11 +49,18 @@ export function parseArgs(argv: readonly string[]): CliArgs {
       workingId = id;
       i++;
     } else if (a.startsWith('--working=')) workingId = a.slice('--working='.length);
+    else if (a === '--data') {
+      const f = rest[i + 1];
+      if (f === undefined || f.startsWith('--'))
+        return { command: 'error', message: '--data needs a data set file, e.g. --data my-cables.csv' };
+      dataFile = f;
+      i++;
+    } else if (a.startsWith('--data=')) dataFile = a.slice('--data='.length);
     else if (a.startsWith('-')) return { command: 'error', message: `unknown option "${a}"` };
     else if (file === null) file = a;
     else return { command: 'error', message: `one file at a time; got "${file}" and "${a}"` };
   }
   if (file === null)
     return { command: 'error', message: 'name the project file to check, e.g. dropline check site.json' };
-  return { command: 'check', file, json, workingId };
+  return { command: 'check', file, json, workingId, dataFile };
 }

@@ -8,6 +8,8 @@ import { MAX_TEXT_CHARS } from '../model/safeJson.ts';
 import type { ProjectDocument } from '../model/types.ts';
 import type { Results } from '../solver/results.ts';
 import { solve as realSolve } from '../solver/solve.ts';
+import type { CatalogueSet } from '../catalogue/catalogueSet.ts';
+import { parseCatalogueCsv, parseCatalogueJson } from '../catalogue/loadCatalogue.ts';
 import { parseArgs, USAGE } from './args.ts';
 import { buildCliJson, cliJsonText } from './jsonOutput.ts';
 import { formatReport } from './report.ts';
@@ -59,7 +61,7 @@ function readError(file: string, e: unknown): string {
 export function runCli(
   argv: readonly string[],
   io: CliIo,
-  solve: (doc: ProjectDocument) => Results = realSolve,
+  solve: (doc: ProjectDocument, catalogue?: CatalogueSet) => Results = realSolve,
 ): number {
   const args = parseArgs(argv);
   if (args.command === 'help') {
@@ -87,9 +89,29 @@ export function runCli(
   }
   for (const w of parsed.warnings) io.stderr(`dropline: note: ${w}\n`);
 
+  let catalogue: CatalogueSet | undefined;
+  if (args.dataFile !== null) {
+    let dataText: string;
+    try {
+      dataText = io.readText(args.dataFile);
+    } catch (e) {
+      io.stderr(readError(args.dataFile, e));
+      return 2;
+    }
+    const isJson = /\.json$/i.test(args.dataFile) || dataText.trimStart().startsWith('{');
+    const loaded = isJson ? parseCatalogueJson(dataText) : parseCatalogueCsv(dataText);
+    if (!loaded.ok) {
+      io.stderr(
+        `dropline: ${args.dataFile} is not a valid conductor data set:\n${loaded.errors.map((e) => `  - ${e}\n`).join('')}`,
+      );
+      return 2;
+    }
+    catalogue = loaded.catalogue;
+  }
+
   let results: Results;
   try {
-    results = solve(parsed.doc);
+    results = catalogue ? solve(parsed.doc, catalogue) : solve(parsed.doc);
   } catch (e) {
     io.stderr(
       `dropline: internal error while solving ${args.file}: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}\n`,

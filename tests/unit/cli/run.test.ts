@@ -34,6 +34,7 @@ describe('arguments', () => {
       file: 'a.json',
       json: true,
       workingId: null,
+      dataFile: null,
     });
     expect(parseArgs(['check', '--working=C3', 'a.json'])).toMatchObject({ workingId: 'C3' });
     expect(parseArgs([])).toEqual({ command: 'help' });
