@@ -238,6 +238,18 @@ function buildResults(s: DropState): Results {
   };
 }
 
+/** The state behind each result set, so passes built on the drop results can read its arrays. */
+const STATE_OF = new WeakMap<Results, DropState>();
+
+/**
+ * The drop solver's working arrays behind `results` (read only), or undefined for results it did
+ * not build. Protection uses them instead of building every result object.
+ * @example dropStateOf(solveDrop(doc))?.order
+ */
+export function dropStateOf(results: Results): DropState | undefined {
+  return STATE_OF.get(results);
+}
+
 function checkDataSet(s: DropState, settings: Loose, given: boolean): void {
   const wanted = settings.dataSet;
   if (typeof wanted !== 'string' || wanted === s.catalogue.id) return;
@@ -270,7 +282,9 @@ export function solveDrop(doc: ProjectDocument, catalogue?: CatalogueSet): Resul
     sumDemand(s);
     accumulate(s);
     judgeLoads(s);
-    return buildResults(s);
+    const results = buildResults(s);
+    STATE_OF.set(results, s);
+    return results;
   } catch (error) {
     // A defect of ours, not of the user's data: report it rather than take the editor down.
     findings.push({
