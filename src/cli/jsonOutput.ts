@@ -1,5 +1,5 @@
 /** `--json`: the full results for other programs. The shape is documented in docs/cli-json.md. */
-import type { ProjectDocument } from '../model/types.ts';
+import type { Device, ProjectDocument } from '../model/types.ts';
 import { CAUTIONS } from '../model/cautions.ts';
 import type { Results } from '../solver/results.ts';
 import type { CheckSummary } from './summary.ts';
@@ -19,7 +19,79 @@ export interface CliJson {
   >;
   summary: CheckSummary;
   cautions: readonly string[];
+  /** The checks a reviewer reads first, flat per element; the full figures are under `results`. */
+  checks: CheckedElements;
   results: Results;
+}
+
+interface CheckLine {
+  key: string;
+  pass: boolean | null;
+  value: number | null;
+  limit: number | null;
+  unit: string;
+  message: string;
+}
+
+export interface CheckedElements {
+  cables: Record<
+    string,
+    {
+      device: Device | null;
+      /** Corrected current-carrying capacity Iz, amperes (null where no table applies). */
+      iz: number | null;
+      ib: number;
+      checks: CheckLine[];
+    }
+  >;
+  /** Boards, junctions, loads and the supply. */
+  nodes: Record<
+    string,
+    {
+      kind: string;
+      /** Design loop impedance at operating temperature, ohms, with its limit and the cold test limit. */
+      zs: { ohm: number; maxOhm: number | null; testMaxOhm: number | null } | null;
+      /** Prospective fault current, amperes: line to neutral, three-phase, and the larger. */
+      pfc: { lnA: number; lllA: number | null; maxA: number } | null;
+      checks: CheckLine[];
+    }
+  >;
+}
+
+const line = (c: CheckLine): CheckLine => ({
+  key: c.key,
+  pass: c.pass,
+  value: c.value,
+  limit: c.limit,
+  unit: c.unit,
+  message: c.message,
+});
+
+function checkedElements(doc: ProjectDocument, results: Results): CheckedElements {
+  const out: CheckedElements = { cables: {}, nodes: {} };
+  for (const cable of doc.cables) {
+    const r = results.cables[cable.id];
+    if (!r) continue;
+    const p = r.protection;
+    out.cables[cable.id] = {
+      device: p?.device ?? null,
+      iz: p?.izA ?? null,
+      ib: r.ibA,
+      checks: (p?.checks ?? []).map(line),
+    };
+  }
+  for (const node of doc.nodes) {
+    const r = results.nodes[node.id];
+    if (!r) continue;
+    const p = r.protection;
+    out.nodes[node.id] = {
+      kind: node.kind,
+      zs: p ? { ohm: p.zsOhm, maxOhm: p.zsMaxOhm, testMaxOhm: p.testZsMaxOhm } : null,
+      pfc: p ? { lnA: p.fault.lnA, lllA: p.fault.lllA, maxA: p.fault.maxA } : null,
+      checks: (p?.checks ?? []).map(line),
+    };
+  }
+  return out;
 }
 
 export function buildCliJson(
@@ -46,6 +118,7 @@ export function buildCliJson(
     },
     summary,
     cautions: CAUTIONS,
+    checks: checkedElements(doc, results),
     results,
   };
 }

@@ -55,3 +55,27 @@ test('a broken data set is refused with the row and column, exit 2', () => {
   expect(missing.code).toBe(2);
   expect(missing.err).toMatch(/cannot read nope\.csv/);
 });
+
+test('--json carries per cable device, iz and checks, and per node zs and pfc', () => {
+  const demo = readFileSync('public/demo-project.json', 'utf8');
+  files['demo.json'] = demo;
+  const r = run(['check', 'demo.json', '--json']);
+  const json = JSON.parse(r.out) as {
+    checks: {
+      cables: Record<string, { device: unknown; iz: number | null; checks: { key: string }[] }>;
+      nodes: Record<string, { kind: string; zs: { ohm: number } | null; pfc: { maxA: number } | null }>;
+    };
+    results: { nodes: Record<string, { protection?: { zsOhm: number } }> };
+  };
+  const cables = Object.values(json.checks.cables);
+  expect(cables.length).toBeGreaterThan(20);
+  expect(cables.every((c) => 'device' in c && 'iz' in c)).toBe(true);
+  expect(cables.some((c) => c.checks.some((k) => k.key === 'inIz'))).toBe(true);
+  const boards = Object.entries(json.checks.nodes).filter(([, n]) => n.kind === 'board');
+  expect(boards.length).toBeGreaterThan(2);
+  for (const [id, b] of boards) {
+    // The flat figure is the solver's own, not a second computation.
+    expect(b.zs?.ohm).toBe(json.results.nodes[id]!.protection!.zsOhm);
+    expect(b.pfc?.maxA).toBeGreaterThan(0);
+  }
+});
