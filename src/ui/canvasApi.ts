@@ -5,7 +5,10 @@
 import type { Position } from '../model/types.ts';
 
 export interface CanvasApi {
+  /** The whole diagram on screen, however small. */
   fitView(): void;
+  /** The opening view: fitted when readable, else labels-size zoom on the supply end. */
+  startView(): void;
   /** Zoom to 1:1 about the middle of the view. */
   zoomActual(): void;
   centreOn(position: Position): void;

@@ -17,6 +17,7 @@ export type ShortcutId =
   | 'saveAs'
   | 'open'
   | 'fit'
+  | 'startView'
   | 'zoomActual'
   | 'tidy'
   | 'help'
@@ -52,6 +53,11 @@ export const SHORTCUTS: readonly Shortcut[] = [
   { id: 'saveAs', keys: `${SHIFT}${MOD}S`, what: 'Save as a new file' },
   { id: 'open', keys: `${MOD}O`, what: 'Open a project file' },
   { id: 'fit', keys: `${SHIFT}1`, what: 'Fit the diagram to the screen' },
+  {
+    id: 'startView',
+    keys: `${SHIFT}2`,
+    what: 'Readable view of the supply end (where a project opens)',
+  },
   { id: 'zoomActual', keys: `${SHIFT}0`, what: 'Zoom to 100 %' },
   { id: 'tidy', keys: `${SHIFT}T`, what: 'Tidy the layout from the supply down' },
   { id: 'help', keys: '?', what: 'Show this help' },

@@ -42,6 +42,7 @@ export function useShortcuts(): void {
       if (key === 'escape') return run(() => s.setSelection([]));
       if (e.key === '?') return run(() => s.openDialog('help'));
       if (e.shiftKey && e.code === 'Digit1') return run(() => canvas()?.fitView());
+      if (e.shiftKey && e.code === 'Digit2') return run(() => canvas()?.startView());
       if (e.shiftKey && e.code === 'Digit0') return run(() => canvas()?.zoomActual());
       if (e.shiftKey && key === 't') return run(tidy);
       const step = GRID * (e.shiftKey ? 4 : 1);

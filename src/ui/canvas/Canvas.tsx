@@ -17,6 +17,7 @@ import {
   type EdgeChange,
   type NodeChange,
   type OnMove,
+  type ReactFlowInstance,
 } from '@xyflow/react';
 import { useEditor, editorStore } from '../../store/editorStore.ts';
 import { GRID, NODE_SIZE } from '../../model/layout.ts';
@@ -26,6 +27,7 @@ import { ElementNode } from './ElementNode.tsx';
 import { CableEdge } from './CableEdge.tsx';
 import { detailForZoom, type CableFlowEdge, type Detail, type ElementFlowNode } from './flowTypes.ts';
 import { registerCanvas } from '../canvasApi.ts';
+import { fitViewport, MIN_ZOOM, startViewport } from './startView.ts';
 import { addPart, snap } from '../actions.ts';
 import { isPartKind, PART_MIME } from '../parts.ts';
 import { ContextMenu, type MenuTarget } from './ContextMenu.tsx';
@@ -45,6 +47,11 @@ function applySelectChanges(changes: (NodeChange | EdgeChange)[]): void {
     else set.delete(c.id);
   }
   s.setSelection([...set]);
+}
+
+function screenSize(): { width: number; height: number } {
+  const r = document.querySelector('.ed-canvas .react-flow')?.getBoundingClientRect();
+  return r ? { width: r.width, height: r.height } : { width: 800, height: 600 };
 }
 
 function reportFlowError(code: string, message: string): void {
@@ -77,7 +84,9 @@ function FlowView() {
 
   useEffect(() => {
     registerCanvas({
-      fitView: () => void flow.fitView({ padding: 0.12, maxZoom: 1.1, duration: 250 }),
+      fitView: () =>
+        void flow.setViewport(fitViewport(editorStore.getState().doc, screenSize()), { duration: 250 }),
+      startView: () => void flow.setViewport(startViewport(editorStore.getState().doc, screenSize())),
       zoomActual: () => void flow.zoomTo(1, { duration: 0 }),
       centreOn: (p) => void flow.setCenter(p.x, p.y, { zoom: Math.max(flow.getZoom(), 1), duration: 300 }),
       viewCentre: () => {
@@ -131,6 +140,13 @@ function FlowView() {
       connectionProblem(editorStore.getState().doc, c.source, c.target) === null,
     [],
   );
+
+  // The project opened before the first render: open on a readable view of it.
+  const onInit = useCallback((instance: ReactFlowInstance<ElementFlowNode, CableFlowEdge>) => {
+    const vp = startViewport(editorStore.getState().doc, screenSize());
+    void instance.setViewport(vp);
+    setDetail(detailForZoom(vp.zoom));
+  }, []);
 
   const onMove: OnMove = useCallback((_e, viewport) => setDetail(detailForZoom(viewport.zoom)), []);
 
@@ -186,10 +202,9 @@ function FlowView() {
         onlyRenderVisibleElements
         deleteKeyCode={null}
         disableKeyboardA11y
-        minZoom={0.1}
+        minZoom={MIN_ZOOM}
         maxZoom={2.5}
-        fitView
-        fitViewOptions={{ padding: 0.12, maxZoom: 1.1 }}
+        onInit={onInit}
       >
         <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="#c9cfd6" />
         <Controls showInteractive={false} position="bottom-left" />

@@ -25,6 +25,11 @@ export type CableEdgeData = {
 export type ElementFlowNode = Node<ElementNodeData, 'element'>;
 export type CableFlowEdge = Edge<CableEdgeData, 'cable'>;
 
+/** Below this zoom only status shows; from here short labels. */
+export const SHORT_DETAIL_ZOOM = 0.45;
+/** From this zoom the labels show in full. */
+export const FULL_DETAIL_ZOOM = 0.8;
+
 export function detailForZoom(zoom: number): Detail {
-  return zoom < 0.45 ? 0 : zoom < 0.8 ? 1 : 2;
+  return zoom < SHORT_DETAIL_ZOOM ? 0 : zoom < FULL_DETAIL_ZOOM ? 1 : 2;
 }

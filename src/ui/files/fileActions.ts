@@ -39,7 +39,7 @@ export function openText(text: string, fileName: string): boolean {
       ? ` with ${parsed.warnings.length} warning(s): ${parsed.warnings.slice(0, 3).join('; ')}`
       : '';
   s.notify(`Opened ${fileName}${extra}.`);
-  requestAnimationFrame(() => canvas()?.fitView());
+  requestAnimationFrame(() => canvas()?.startView());
   return true;
 }
 
@@ -62,7 +62,7 @@ export function newDocument(): void {
   s.dispatch({ type: 'replaceDocument', doc: newProject({ date: new Date().toISOString().slice(0, 10) }) });
   s.setFileName(null);
   s.notify('New project. Undo brings the previous one back.');
-  requestAnimationFrame(() => canvas()?.fitView());
+  requestAnimationFrame(() => canvas()?.startView());
 }
 
 function suggestedName(): string {
