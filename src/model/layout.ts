@@ -12,7 +12,7 @@ import type { Id, NodeKind, Position, ProjectDocument } from './types.ts';
 /** Drawn size of each node kind on the canvas, in canvas units (px at zoom 1). */
 export const NODE_SIZE: Record<NodeKind, { width: number; height: number }> = {
   supply: { width: 72, height: 72 },
-  board: { width: 150, height: 48 },
+  board: { width: 176, height: 64 },
   junction: { width: 16, height: 16 },
   load: { width: 96, height: 84 },
 };

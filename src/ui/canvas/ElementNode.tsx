@@ -54,7 +54,9 @@ function ElementNodeView({ data, selected }: NodeProps<ElementFlowNode>) {
         <>
           <span className="ed-busbar" />
           <span className="ed-board-name">{detail > 0 ? element.name : ''}</span>
-          <Badge status={status} label={label} detail={detail} />
+          <span className="ed-board-foot">
+            <Badge status={status} label={label} detail={detail} />
+          </span>
         </>
       )}
       {element.kind === 'junction' && (
