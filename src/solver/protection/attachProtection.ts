@@ -1,22 +1,25 @@
 /**
  * Adds capacity, loop impedance, fault level, protective conductor, phase balance and motor starting
- * to drop results. One pass outwards from the origin (cables in path order) and constant work per
- * element, so it can run on every edit.
+ * to drop results.
+ *
+ * One numeric pass outwards from the origin over flat arrays decides every check and reports the
+ * failed and unassessed ones as findings at once (protectionPass.ts); the per-element protection
+ * objects, their checks and working are built when first read (protectionViews.ts). With results
+ * from solveDrop it reads the solver's own arrays and builds no drop result object either, so it
+ * can run on every edit and on 100,000 elements. attachProtectionReference is the eager form it is
+ * tested against.
  */
-import type { Cable, Id, ProjectDocument, Supply } from '../../model/types.ts';
+import type { ProjectDocument, Supply } from '../../model/types.ts';
 import type { Finding, Results } from '../results.ts';
 import type { CatalogueSet } from '../../catalogue/catalogueSet.ts';
-import { BUILT_IN_GG_FUSES, CMIN, settingA, type FuseDataSet } from '../../catalogue/devices.ts';
+import { BUILT_IN_GG_FUSES, type FuseDataSet } from '../../catalogue/devices.ts';
 import { BUILT_IN_CAPACITY_TABLES, type CapacityTable } from '../../catalogue/capacityTables.ts';
-import type { Check, FaultLevel, Impedance, NodeProtection } from './protectionResults.ts';
-import { buildTopology } from './topology.ts';
-import { cableCapacity } from './capacity.ts';
-import { breakingCheck, capacityChecks, cpcCheck } from './cableChecks.ts';
-import { zsChecks } from './zsCheck.ts';
-import { requiredDisconnectionS } from './disconnection.ts';
-import { C_MAX, magnitude, segmentLoop, sourceImpedance } from './impedance.ts';
-import { fmt, working } from './working.ts';
-import { motorStartFor } from '../motorStart.ts';
+import type { ProtectionSummary } from './protectionResults.ts';
+import { sourceImpedance } from './impedance.ts';
+import { REFERENCES } from './protectionWorking.ts';
+import { treeInputs } from './treeInputs.ts';
+import { protectionPass } from './protectionPass.ts';
+import { protectedRecords } from './protectionViews.ts';
 import { boardBalances } from '../balancePhases.ts';
 
 /** Optional protection data a catalogue may carry; the built-in sets are used where absent. */
@@ -25,45 +28,17 @@ interface ProtectionData {
   capacityTables?: readonly CapacityTable[];
 }
 
-const FAIL_CODES: Record<Check['key'], string> = {
-  ibIn: 'ibOverIn',
-  inIz: 'overCapacity',
-  i2: 'i2OverIz',
-  zs: 'zsOverMax',
-  rcdTouch: 'touchVoltage',
-  breaking: 'breakingCapacity',
-  cpc: 'cpcAdiabatic',
-  motorDip: 'motorDip',
-};
-
-interface Acc {
-  zsHot: Impedance;
-  zsCold: Impedance;
-  faultLoop: Impedance;
-  faultPhase: Impedance;
-  threePhase: boolean;
-}
-
-function add(a: Impedance, r: number, x: number): Impedance {
-  return { rOhm: a.rOhm + r, xOhm: a.xOhm + x };
-}
-
-function faultLevel(acc: Acc, u0V: number): FaultLevel {
-  const lnA = (C_MAX * u0V) / magnitude(acc.faultLoop);
-  const lllA = acc.threePhase ? (C_MAX * u0V) / magnitude(acc.faultPhase) : null;
-  return { lnA, lllA, maxA: Math.max(lnA, lllA ?? 0), cMax: C_MAX };
-}
-
 /**
  * Adds `protection` to every fed cable and node, `motorStart` to motor loads and a summary with
- * failed-check counts and phase balance; each failed check also becomes an error finding.
+ * failed-check counts and phase balance; each failed check also becomes an error finding, each
+ * check that cannot be assessed a warning.
  * @example attachProtection(doc, solveDrop(doc)).nodes['DB1'].protection?.zsOhm
  */
 export function attachProtection(doc: ProjectDocument, results: Results, catalogue?: CatalogueSet): Results {
   const data = (catalogue ?? {}) as ProtectionData;
   const fuses = data.ggFuses ?? BUILT_IN_GG_FUSES;
   const tables = data.capacityTables ?? BUILT_IN_CAPACITY_TABLES;
-  const findings: Finding[] = [...results.findings];
+  const findings: Finding[] = results.findings.slice();
   const supply = doc.nodes.find((n): n is Supply => n.kind === 'supply');
   const source = supply ? sourceImpedance(supply, doc.settings) : undefined;
   if (!supply || !source) {
@@ -77,209 +52,33 @@ export function attachProtection(doc: ProjectDocument, results: Results, catalog
     });
     return { ...results, findings };
   }
-  const topo = buildTopology(doc, results);
-  const u0 = supply.u0V;
-  // The drop results are objects with computed getters: spreading would lose them, so the
-  // protection fields are added to each object in place (solve builds fresh results every time).
-  const { cables, nodes, loads } = results;
-  const acc = new Map<Id, Acc>();
-  const ze = Math.max(0, supply.zeOhm);
-  acc.set(supply.id, {
-    zsHot: { rOhm: ze, xOhm: 0 },
-    zsCold: { rOhm: ze, xOhm: 0 },
-    faultLoop: source.loop,
-    faultPhase: source.phase,
-    threePhase: supply.phases === 3,
-  });
-  let failed = 0;
-  let unassessed = 0;
-  const tally = (checks: Check[], elementId: Id) => {
-    for (const c of checks) {
-      if (c.pass === false) {
-        failed++;
-        findings.push({ code: FAIL_CODES[c.key], severity: 'error', elementId, message: c.message });
-      } else if (c.pass === null) {
-        unassessed++;
-        findings.push({ code: 'checkNotAssessed', severity: 'warning', elementId, message: c.message });
-      }
-    }
+  const t = treeInputs(doc, results);
+  const u0V = supply.u0V;
+  const pass = protectionPass({ t, results, supply, u0V, source, fuses, tables }, findings);
+  if (t.root >= 0) pass.a.hasNode[t.root] = 1;
+  const records = protectedRecords(
+    { t, a: pass.a, supply, u0V, source, fuses, tables, motors: pass.motors },
+    results,
+  );
+  let balance: ProtectionSummary['balance'] | undefined;
+  const protection: ProtectionSummary = {
+    failedChecks: pass.failed,
+    unassessedChecks: pass.unassessed,
+    // Reads every three-phase board's currents: built when first asked for.
+    get balance() {
+      return (balance ??= boardBalances(doc, results));
+    },
+    set balance(value) {
+      balance = value;
+    },
+    fuseDataSet: { id: fuses.id, title: fuses.title, source: fuses.source },
+    capacityDataSets: [...new Set(tables.map((x) => x.title))],
   };
-  const nodeProtection = (a: Acc, checks: Check[], zsMax: number | null, testMax: number | null) => {
-    const zsOhm = magnitude(a.zsHot);
-    const p: NodeProtection = {
-      zsOhm,
-      zs: a.zsHot,
-      zsColdOhm: magnitude(a.zsCold),
-      zsMaxOhm: zsMax,
-      testZsMaxOhm: testMax,
-      earthFaultA: (CMIN * u0) / zsOhm,
-      fault: faultLevel(a, u0),
-      checks,
-      working: [],
-    };
-    p.working.push(zsWorking(supply, p, a), pfcWorking(source.basis, p, u0));
-    return p;
-  };
-  const supplyResult = nodes[supply.id];
-  const supplyAcc = acc.get(supply.id)!;
-  if (supplyResult) supplyResult.protection = nodeProtection(supplyAcc, [], null, null);
-
-  for (const cable of topo.order) {
-    const up = acc.get(cable.from);
-    const cr = cables[cable.id];
-    if (!up || !cr) continue;
-    const seg = segmentLoop(cable);
-    if (!seg) {
-      findings.push({
-        code: 'noResistance',
-        severity: 'warning',
-        elementId: cable.id,
-        message: `cable ${cable.name}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
-      });
-      continue;
-    }
-    const n = Math.max(1, cable.parallel);
-    const xLen = (cr.xOhmPerM * cable.lengthM) / n;
-    const a: Acc = {
-      // The earth loop is line out and cpc back: its reactance is taken as twice the line's.
-      zsHot: add(up.zsHot, seg.r1r2HotOhm, 2 * xLen),
-      zsCold: add(up.zsCold, seg.r1r2ColdOhm, 2 * xLen),
-      faultLoop: add(up.faultLoop, 2 * seg.r1ColdOhm, 2 * xLen),
-      faultPhase: add(up.faultPhase, seg.r1ColdOhm, xLen),
-      threePhase: up.threePhase && cable.phases === 3,
-    };
-    acc.set(cable.to, a);
-    const prot = topo.protecting.get(cable.id) ?? { device: null, cableId: null };
-    const device = prot.device;
-    const circuit = topo.circuit.get(cable.id) ?? 'final';
-    const requiredS = device ? requiredDisconnectionS(supply.earthing, circuit, settingA(device), u0) : null;
-    const toNode = topo.nodeById.get(cable.to);
-    const nodeName = `${toNode?.kind ?? 'node'} ${toNode?.name ?? cable.to}`;
-
-    const cap = cableCapacity(cable, tables);
-    const checks = capacityChecks(cable, cr.ibA, device, cap);
-    if (cable.device) {
-      const f = faultLevel(up, u0);
-      checks.push(breakingCheck(cable, cable.device, f.maxA, `the sending end of ${cable.name}`));
-    }
-    const zsOhm = magnitude(a.zsHot);
-    const earthFaultA = (CMIN * u0) / zsOhm;
-    checks.push(cpcCheck(cable, device, earthFaultA, fuses));
-    tally(checks, cable.id);
-    const izA = 'error' in cap ? null : cap.izA;
-    cr.protection = {
-      device,
-      deviceCableId: prot.cableId,
-      circuit,
-      itA: 'error' in cap ? null : cap.itA,
-      izA,
-      factors: 'error' in cap ? null : { ca: cap.ca, cg: cap.cg, ci: cap.ci },
-      capacityUse: izA ? cr.ibA / izA : null,
-      r1r2HotOhm: seg.r1r2HotOhm,
-      r1r2ColdOhm: seg.r1r2ColdOhm,
-      requiredTimeS: requiredS,
-      checks,
-      working: [...('error' in cap ? [] : [cap.working]), r1r2Working(cable, seg)],
-    };
-
-    const nr = nodes[cable.to];
-    if (!nr) continue;
-    const zs = zsChecks(nodeName, zsOhm, device, requiredS ?? 5, supply, fuses);
-    const nodeChecks = zs.checks;
-    nr.protection = nodeProtection(a, nodeChecks, zs.zsMaxOhm, zs.testZsMaxOhm);
-    const lr = loads[cable.to];
-    const ld = toNode?.kind === 'load' ? toNode : undefined;
-    if (lr && ld?.motor) {
-      const motor = motorStartFor(ld, results, topo, source, u0);
-      if (motor) {
-        lr.motorStart = motor.result;
-        nodeChecks.push(motor.check);
-      }
-    }
-    tally(nodeChecks, cable.to);
-  }
-
   return {
     ...results,
+    ...records,
     findings,
     references: [...results.references, ...REFERENCES.filter((r) => !results.references.includes(r))],
-    protection: {
-      failedChecks: failed,
-      unassessedChecks: unassessed,
-      balance: boardBalances(doc, results),
-      fuseDataSet: { id: fuses.id, title: fuses.title, source: fuses.source },
-      capacityDataSets: [...new Set(tables.map((t) => t.title))],
-    },
+    protection,
   };
-}
-
-const REFERENCES = [
-  'IEC 60364-4-41:2005 and BS 7671:2018 Chapter 41 (Cmin 0.95) for disconnection and maximum Zs',
-  'IEC 60364-5-52:2009 Annex B and BS 7671 Appendix 4 for current-carrying capacity and correction factors',
-  'IEC 60364-5-54 / BS 7671 Tables 54.2-54.7 for k values and protective conductor sizes',
-  'IEC 60909-0:2016 cmax 1.05 for maximum prospective fault current',
-];
-
-function r1r2Working(cable: Cable, seg: NonNullable<ReturnType<typeof segmentLoop>>) {
-  return working(
-    'r1r2',
-    'R1 + R2 of this segment',
-    '(R1 + R2) = (r1 + r2) at θ x L / n',
-    [
-      [
-        'r1 at 20 °C',
-        seg.r1PerM20 * 1000,
-        'mohm/m',
-        `IEC 60228 Table 2, ${cable.material} ${cable.sizeMm2} mm²`,
-      ],
-      [
-        'r2 at 20 °C',
-        seg.r2PerM20 * 1000,
-        'mohm/m',
-        `cpc ${cable.cpc.kind} ${cable.cpc.material} ${cable.cpc.sizeMm2} mm²`,
-      ],
-      ['L', cable.lengthM, 'm', 'cable.lengthM (one way)'],
-      ['n', Math.max(1, cable.parallel), '', 'cable.parallel'],
-    ],
-    seg.r1r2HotOhm,
-    'ohm',
-    `at 20 °C: ${fmt(seg.r1r2ColdOhm, 4)} ohm; hot at the insulation's maximum operating temperature (α20 from IEC 60228)`,
-  );
-}
-
-function zsWorking(supply: Supply, p: NodeProtection, a: Acc) {
-  return working(
-    'zs',
-    'Earth fault loop impedance Zs',
-    'Zs = Ze + sum of (R1 + R2), R and X summed separately',
-    [
-      ['Ze', supply.zeOhm, 'ohm', `supply.zeOhm (${supply.zeSource})`],
-      ['R', a.zsHot.rOhm, 'ohm', 'Ze plus R1 + R2 at operating temperature along the path'],
-      ['X', a.zsHot.xOhm, 'ohm', 'path reactance (twice the line conductor reactance)'],
-      ['Zs cold', p.zsColdOhm, 'ohm', 'same path at 20 °C'],
-    ],
-    p.zsOhm,
-    'ohm',
-    p.testZsMaxOhm !== null
-      ? `largest value to accept when testing with conductors cold: 0.8 x Zs max = ${fmt(p.testZsMaxOhm)} ohm`
-      : undefined,
-  );
-}
-
-function pfcWorking(basis: string, p: NodeProtection, u0V: number) {
-  return working(
-    'pfc',
-    'Prospective fault current',
-    'I = cmax x U0 / |Zsource + Zcables at 20 °C| (line-neutral loop; per phase for three-phase)',
-    [
-      ['cmax', p.fault.cMax, '', 'IEC 60909-0 Table 1, LV +6 % systems'],
-      ['U0', u0V, 'V', 'supply.u0V'],
-      ['source', basis, '', 'supply'],
-      ['I L-N', p.fault.lnA, 'A', 'line-neutral fault'],
-      ['I 3-phase', p.fault.lllA ?? '-', 'A', 'three-phase symmetrical fault'],
-    ],
-    p.fault.maxA,
-    'A',
-    'The neutral is taken the same size as the line conductor.',
-  );
 }

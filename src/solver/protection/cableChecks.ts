@@ -11,6 +11,26 @@ import type { CapacityOk } from './capacity.ts';
 import { operatingTimeS } from './disconnection.ts';
 import { fmt, working } from './working.ts';
 
+// Messages of checks that fail or cannot be assessed: shared with the fast pass, which builds
+// findings without building the checks.
+export const ibInFailMessage = (src: string, ibA: number, inA: number): string =>
+  `${src}: Ib ${fmt(ibA)} A exceeds In ${inA} A; choose a larger device`;
+export const capacityErrorMessage = (src: string, error: string): string => `${src}: ${error}`;
+export const inIzFailMessage = (src: string, label: string, base: number, izA: number): string =>
+  `${src}: ${label} ${fmt(base)} A exceeds Iz ${fmt(izA)} A; increase the size or improve the installation conditions`;
+export const i2FailMessage = (src: string, i2: number, lim: number): string =>
+  `${src}: I2 ${fmt(i2)} A exceeds 1.45 Iz ${fmt(lim)} A; use a larger cable or a smaller device`;
+export const breakingFailMessage = (name: string, kA: number, where: string, breakingKa: number): string =>
+  `cable ${name}: prospective fault current ${fmt(kA)} kA at ${where} exceeds the device's ${breakingKa} kA; choose a device with a higher breaking capacity`;
+export const CPC_WHY_SLOW = 'the device does not operate within 5 s at this fault current';
+export const CPC_WHY_NO_DEVICE = 'no protective device given';
+export const cpcNotAssessedMessage = (name: string, why: string): string =>
+  `cable ${name}: adiabatic check not possible: ${why}`;
+export const cpcFailMessage = (name: string, cpcMm2: number, sMin: number): string =>
+  `cable ${name}: cpc ${fmt(cpcMm2)} mm² is below the ${fmt(sMin)} mm² the adiabatic equation needs; increase the cpc`;
+/** Where a breaking-capacity check applies, for its message and working. */
+export const sendingEnd = (name: string): string => `the sending end of ${name}`;
+
 export function check(
   key: CheckKey,
   title: string,
@@ -43,9 +63,7 @@ export function capacityChecks(
         ibA,
         inA,
         'A',
-        ibA <= inA
-          ? `Ib ${fmt(ibA)} A <= In ${inA} A`
-          : `${src}: Ib ${fmt(ibA)} A exceeds In ${inA} A; choose a larger device`,
+        ibA <= inA ? `Ib ${fmt(ibA)} A <= In ${inA} A` : ibInFailMessage(src, ibA, inA),
         working(
           'ibIn',
           'Ib <= In',
@@ -69,7 +87,7 @@ export function capacityChecks(
         null,
         null,
         'A',
-        `${src}: ${cap.error}`,
+        capacityErrorMessage(src, cap.error),
         working('inIz', 'In <= Iz', 'In <= Iz', [], 'not assessed', '', cap.error),
       ),
     );
@@ -86,9 +104,7 @@ export function capacityChecks(
       base,
       cap.izA,
       'A',
-      okIz
-        ? `${label} ${fmt(base)} A <= Iz ${fmt(cap.izA)} A`
-        : `${src}: ${label} ${fmt(base)} A exceeds Iz ${fmt(cap.izA)} A; increase the size or improve the installation conditions`,
+      okIz ? `${label} ${fmt(base)} A <= Iz ${fmt(cap.izA)} A` : inIzFailMessage(src, label, base, cap.izA),
       working(
         'inIz',
         `${label} <= Iz`,
@@ -115,9 +131,7 @@ export function capacityChecks(
         i2,
         lim,
         'A',
-        i2 <= lim
-          ? `I2 ${fmt(i2)} A <= 1.45 Iz ${fmt(lim)} A`
-          : `${src}: I2 ${fmt(i2)} A exceeds 1.45 Iz ${fmt(lim)} A; use a larger cable or a smaller device`,
+        i2 <= lim ? `I2 ${fmt(i2)} A <= 1.45 Iz ${fmt(lim)} A` : i2FailMessage(src, i2, lim),
         working(
           'i2',
           'I2 <= 1.45 Iz',
@@ -158,7 +172,7 @@ export function breakingCheck(cable: Cable, device: Device, pfcA: number, where:
     'kA',
     ok
       ? `${fmt(kA)} kA <= ${device.breakingKa} kA`
-      : `cable ${cable.name}: prospective fault current ${fmt(kA)} kA at ${where} exceeds the device's ${device.breakingKa} kA; choose a device with a higher breaking capacity`,
+      : breakingFailMessage(cable.name, kA, where, device.breakingKa),
     working(
       'breaking',
       'Breaking capacity',
@@ -200,9 +214,7 @@ export function cpcCheck(
   const t = device ? operatingTimeS(device, earthFaultA, fuses) : null;
   const title = 'Protective conductor withstand (adiabatic)';
   if (t === null) {
-    const why = device
-      ? 'the device does not operate within 5 s at this fault current'
-      : 'no protective device given';
+    const why = device ? CPC_WHY_SLOW : CPC_WHY_NO_DEVICE;
     return check(
       'cpc',
       title,
@@ -212,7 +224,7 @@ export function cpcCheck(
       'mm²',
       byTable
         ? `cpc ${cable.cpc.sizeMm2} mm² meets the table minimum ${tableMin} mm²`
-        : `cable ${cable.name}: adiabatic check not possible: ${why}`,
+        : cpcNotAssessedMessage(cable.name, why),
       working(
         'cpc',
         title,
@@ -235,7 +247,7 @@ export function cpcCheck(
     'mm²',
     ok
       ? `needs ${fmt(sMin)} mm², has ${fmt(cpcMm2)} mm²${cpcMm2 < sMin ? ' (table method)' : ''}`
-      : `cable ${cable.name}: cpc ${fmt(cpcMm2)} mm² is below the ${fmt(sMin)} mm² the adiabatic equation needs; increase the cpc`,
+      : cpcFailMessage(cable.name, cpcMm2, sMin),
     working(
       'cpc',
       title,

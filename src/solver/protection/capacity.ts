@@ -3,7 +3,7 @@
  */
 import type { Cable, Installation } from '../../model/types.ts';
 import { lookupCapacity, type CapacityTable } from '../../catalogue/capacityTables.ts';
-import { groupingFactor, temperatureFactor } from '../../catalogue/capacityFactors.ts';
+import { groupingFactor, temperatureFactor, type FactorLookup } from '../../catalogue/capacityFactors.ts';
 import type { Working } from '../results.ts';
 import { working } from './working.ts';
 
@@ -27,18 +27,30 @@ export interface CapacityOk {
   notes: string[];
 }
 
+/** The figures behind Iz without its working (the numeric pass needs only these). */
+export interface CapacityFigures {
+  itA: number;
+  izA: number;
+  ca: number;
+  cg: number;
+  ci: number;
+  n: number;
+  inst: Installation;
+  loaded: 2 | 3;
+  cell: NonNullable<ReturnType<typeof lookupCapacity>>;
+  temp: FactorLookup;
+  group: FactorLookup;
+}
+
 /**
- * Iz for a cable, or a message naming what is missing and how to fix it.
- * @example cableCapacity(cable2_5TwinEarthClipped)  // { itA: 27, izA: 27, ... }
+ * It, the factors and Iz for a cable, or a message naming what is missing and how to fix it.
+ * @example capacityFigures(cable2_5TwinEarthClipped, BUILT_IN_CAPACITY_TABLES) // { itA: 27, izA: 27, ... }
  */
-export function cableCapacity(
+export function capacityFigures(
   cable: Cable,
   tables: readonly CapacityTable[],
-): CapacityOk | { error: string } {
+): CapacityFigures | { error: string } {
   const inst = cable.installation ?? REFERENCE_INSTALLATION;
-  const notes: string[] = [];
-  if (!cable.installation)
-    notes.push('installation not given: reference method C, 30 °C, not grouped assumed');
   const loaded = cable.phases === 3 ? 3 : 2;
   const cell = lookupCapacity(
     {
@@ -62,22 +74,39 @@ export function cableCapacity(
       error: `ambient ${inst.ambientC} °C is beyond the correction table for ${cable.insulation} insulation: lower the ambient or use higher-temperature insulation`,
     };
   }
-  const buried = inst.method === 'buriedDirect' || inst.method === 'buriedDuct';
   const group = groupingFactor(inst.groupArrangement, inst.groupedCircuits);
   if (!group) {
     return {
       error: `grouping of ${inst.groupedCircuits} bunched circuits is beyond the grouping table (20): split the group or enter a factor from a licensed table`,
     };
   }
+  const ci = inst.insulationFactor > 0 ? Math.min(1, inst.insulationFactor) : 1;
+  const n = Math.max(1, cable.parallel);
+  const izA = cell.itA * temp.factor * group.factor * ci * n;
+  return { itA: cell.itA, izA, ca: temp.factor, cg: group.factor, ci, n, inst, loaded, cell, temp, group };
+}
+
+/**
+ * Iz for a cable with its working, or a message naming what is missing and how to fix it.
+ * @example cableCapacity(cable2_5TwinEarthClipped)  // { itA: 27, izA: 27, ... }
+ */
+export function cableCapacity(
+  cable: Cable,
+  tables: readonly CapacityTable[],
+): CapacityOk | { error: string } {
+  const f = capacityFigures(cable, tables);
+  if ('error' in f) return f;
+  const { inst, loaded, cell, temp, group, ci, n, izA } = f;
+  const notes: string[] = [];
+  if (!cable.installation)
+    notes.push('installation not given: reference method C, 30 °C, not grouped assumed');
+  const buried = inst.method === 'buriedDirect' || inst.method === 'buriedDuct';
   if (buried && inst.groupedCircuits > 1) {
     notes.push(
       'buried circuits grouped: the air-grouping factor is used; check against the buried-grouping table',
     );
   }
-  const ci = inst.insulationFactor > 0 ? Math.min(1, inst.insulationFactor) : 1;
-  const n = Math.max(1, cable.parallel);
   if (n > 1) notes.push(`${n} cables in parallel, taken as sharing current equally`);
-  const izA = cell.itA * temp.factor * group.factor * ci * n;
   return {
     itA: cell.itA,
     izA,

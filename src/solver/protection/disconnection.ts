@@ -3,7 +3,13 @@
  * device, the resulting maximum Zs, and the operating time at a given fault current.
  */
 import type { Device, Earthing } from '../../model/types.ts';
-import { CMIN, INSTANTANEOUS_MULTIPLE, settingA, type FuseDataSet } from '../../catalogue/devices.ts';
+import {
+  CMIN,
+  INSTANTANEOUS_MULTIPLE,
+  settingA,
+  type FuseCurveRow,
+  type FuseDataSet,
+} from '../../catalogue/devices.ts';
 
 /**
  * Maximum disconnection time, seconds (IEC 60364-4-41 Table 41.1 / BS 7671 Table 41.1 for a.c.;
@@ -35,6 +41,35 @@ function fuseCurrentForTime(ia04: number, ia5: number, tS: number): number {
   return ia5 * Math.pow(tS / 5, slope);
 }
 
+const ROWS = new WeakMap<FuseDataSet, Map<number, FuseCurveRow>>();
+
+/** The data set's row for a rating (the first one listed), looked up in a map built once per set. */
+export function fuseRow(fuses: FuseDataSet, ratingA: number): FuseCurveRow | undefined {
+  let rows = ROWS.get(fuses);
+  if (!rows) {
+    rows = new Map();
+    for (const r of fuses.rows) if (!rows.has(r.ratingA)) rows.set(r.ratingA, r);
+    ROWS.set(fuses, rows);
+  }
+  return rows.get(ratingA);
+}
+
+/**
+ * Ia as a bare number, NaN where `operatingCurrent` gives a reason instead (for the numeric pass).
+ * @example operatingCurrentA({ type: 'mcb', curve: 'B', ratingA: 32, breakingKa: 6 }, 0.4, fuses) // 160
+ */
+export function operatingCurrentA(device: Device, requiredS: number, fuses: FuseDataSet): number {
+  if (device.type === 'mcb' || device.type === 'rcbo')
+    return INSTANTANEOUS_MULTIPLE[device.curve ?? 'B'] * device.ratingA;
+  if (device.type === 'mccb') return (device.imMultiple ?? 10) * settingA(device);
+  const row = fuseRow(fuses, device.ratingA);
+  if (!row) return NaN;
+  if (requiredS === 5) return row.ia5sA;
+  if (requiredS === 0.4) return row.ia04sA;
+  if (requiredS > 0.4 && requiredS < 5) return fuseCurrentForTime(row.ia04sA, row.ia5sA, requiredS);
+  return NaN;
+}
+
 /**
  * The current Ia that makes the device operate within the required time, or a reason why it is not
  * known. Breakers use their instantaneous multiple (which also meets 5 s); an mccb Im x Ir; a fuse
@@ -61,7 +96,7 @@ export function operatingCurrent(
       basis: `mccb: Ia = Im x Ir = ${im} x ${ir} A${device.imMultiple === undefined ? ' (Im not given, 10 x Ir assumed)' : ''}`,
     };
   }
-  const row = fuses.rows.find((r) => r.ratingA === device.ratingA);
+  const row = fuseRow(fuses, device.ratingA);
   if (!row) return { error: `the fuse data set "${fuses.title}" has no ${device.ratingA} A row` };
   if (requiredS === 5) return { iaA: row.ia5sA, basis: `${fuses.title}: current for 5 s` };
   if (requiredS === 0.4) return { iaA: row.ia04sA, basis: `${fuses.title}: current for 0.4 s` };
@@ -90,12 +125,14 @@ export function maxZsOhm(iaA: number, u0V: number): number {
  */
 export function operatingTimeS(device: Device, currentA: number, fuses: FuseDataSet): number | null {
   if (device.type === 'fuseGG') {
-    const row = fuses.rows.find((r) => r.ratingA === device.ratingA);
+    const row = fuseRow(fuses, device.ratingA);
     if (!row || currentA < row.ia5sA) return null;
     const slope = Math.log(0.4 / 5) / Math.log(row.ia04sA / row.ia5sA);
     return Math.max(0.1, 5 * Math.pow(currentA / row.ia5sA, slope));
   }
-  const ia = operatingCurrent(device, 5, fuses);
-  if ('error' in ia || currentA < ia.iaA) return null;
+  const ia = operatingCurrentA(device, 5, fuses);
+  // NaN means "no Ia known" only for a device read as a fuse (a type this module does not know).
+  const breaker = device.type === 'mcb' || device.type === 'rcbo' || device.type === 'mccb';
+  if ((!breaker && Number.isNaN(ia)) || currentA < ia) return null;
   return 0.1;
 }

@@ -25,7 +25,7 @@ export function cpcResistance20OhmPerM(cpc: Cpc): number | undefined {
   return resistance20OhmPerM(cpc.material, cpc.sizeMm2);
 }
 
-function cpcAtTemperature(r20: number, cpc: Cpc, tempC: number): number {
+export function cpcAtTemperature(r20: number, cpc: Cpc, tempC: number): number {
   if (cpc.material === 'steel') return r20 * (1 + STEEL_ALPHA20_PER_K * (tempC - 20));
   return atTemperature(r20, cpc.material, tempC);
 }

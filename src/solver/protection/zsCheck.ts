@@ -9,6 +9,20 @@ import { check } from './cableChecks.ts';
 import { maxZsOhm, operatingCurrent } from './disconnection.ts';
 import { fmt, working } from './working.ts';
 
+// Messages of checks that fail or cannot be assessed: shared with the fast pass, which builds
+// findings without building the checks.
+export const zsNoDeviceMessage = (nodeName: string): string =>
+  `${nodeName}: no protective device on the circuit feeding it; add one to the cable's sending end`;
+export const zsIaErrorMessage = (nodeName: string, error: string): string => `${nodeName}: ${error}`;
+export const zsFailMessage = (nodeName: string, zsOhm: number, zsMax: number, requiredS: number): string =>
+  `${nodeName}: Zs ${fmt(zsOhm)} ohm exceeds ${fmt(zsMax)} ohm for disconnection in ${requiredS} s; increase the cable or cpc size, shorten the run, or fit an RCD`;
+export const ttNoRcdMessage = (nodeName: string): string =>
+  `${nodeName}: a TT installation relies on an RCD; fit one (device.rcd) to the circuit`;
+export const ttNoRaMessage = (nodeName: string): string =>
+  `${nodeName}: supply.raOhm (earth electrode resistance) is not given; enter it to check RA x IΔn`;
+export const ttFailMessage = (nodeName: string, v: number): string =>
+  `${nodeName}: RA x IΔn = ${fmt(v)} V exceeds 50 V; lower RA or use a more sensitive RCD`;
+
 export interface ZsOutcome {
   zsMaxOhm: number | null;
   testZsMaxOhm: number | null;
@@ -36,7 +50,7 @@ export function zsChecks(
           zsOhm,
           null,
           'ohm',
-          `${nodeName}: no protective device on the circuit feeding it; add one to the cable's sending end`,
+          zsNoDeviceMessage(nodeName),
           working(
             'zs',
             title,
@@ -63,7 +77,7 @@ export function zsChecks(
         zsOhm,
         rcdLimit,
         'ohm',
-        `${nodeName}: ${ia.error}`,
+        zsIaErrorMessage(nodeName, ia.error),
         working(
           'zs',
           title,
@@ -92,7 +106,7 @@ export function zsChecks(
           ? `Zs ${fmt(zsOhm)} ohm <= ${fmt(zsMax)} ohm`
           : byRcd
             ? `Zs ${fmt(zsOhm)} ohm exceeds the overcurrent limit ${fmt(zsMax)} ohm; the RCD disconnects (Zs <= 50 V / IΔn = ${fmt(rcdLimit!)} ohm)`
-            : `${nodeName}: Zs ${fmt(zsOhm)} ohm exceeds ${fmt(zsMax)} ohm for disconnection in ${requiredS} s; increase the cable or cpc size, shorten the run, or fit an RCD`,
+            : zsFailMessage(nodeName, zsOhm, zsMax, requiredS),
         working(
           'zs',
           title,
@@ -122,7 +136,7 @@ export function zsChecks(
           null,
           50,
           'V',
-          `${nodeName}: a TT installation relies on an RCD; fit one (device.rcd) to the circuit`,
+          ttNoRcdMessage(nodeName),
           working('rcdTouch', 'RA x IΔn <= 50 V', 'RA x IΔn <= 50 V', [], 'not assessed', ''),
         ),
       );
@@ -135,7 +149,7 @@ export function zsChecks(
           null,
           50,
           'V',
-          `${nodeName}: supply.raOhm (earth electrode resistance) is not given; enter it to check RA x IΔn`,
+          ttNoRaMessage(nodeName),
           working('rcdTouch', 'RA x IΔn <= 50 V', 'RA x IΔn <= 50 V', [], 'not assessed', ''),
         ),
       );
@@ -149,9 +163,7 @@ export function zsChecks(
           v,
           50,
           'V',
-          v <= 50
-            ? `RA x IΔn = ${fmt(v)} V <= 50 V`
-            : `${nodeName}: RA x IΔn = ${fmt(v)} V exceeds 50 V; lower RA or use a more sensitive RCD`,
+          v <= 50 ? `RA x IΔn = ${fmt(v)} V <= 50 V` : ttFailMessage(nodeName, v),
           working(
             'rcdTouch',
             'RA x IΔn <= 50 V',
