@@ -15,6 +15,7 @@ import { pasteElements } from './commands/pasteElements.ts';
 import { applyProposals, type ProposedChange } from './commands/applyProposals.ts';
 import { replaceDocument, updateDetails, updateSettings } from './commands/project.ts';
 import { tidyLayout } from './commands/tidyLayout.ts';
+import { splitCable } from './commands/splitCable.ts';
 import type { CommandResult } from './commands/result.ts';
 
 export type { CommandResult };
@@ -32,6 +33,11 @@ export type Command =
   | { type: 'deleteElements'; ids: Id[] }
   | { type: 'updateNode'; id: Id; patch: NodePatch }
   | { type: 'updateCable'; id: Id; patch: CablePatch }
+  /**
+   * Replaces a cable by two in series through a new junction; `ratio` (default 0.5) is the
+   * upstream part's share of the length. The upstream part keeps the id and the device.
+   */
+  | { type: 'splitCable'; id: Id; ratio?: number }
   | { type: 'updateDetails'; patch: Partial<ProjectDetails> }
   | { type: 'updateSettings'; patch: Partial<Settings> }
   /** Copies of elements (e.g. from the clipboard) get fresh ids and are placed `offset` away. */
@@ -59,6 +65,8 @@ export function applyCommand(doc: ProjectDocument, command: Command): CommandRes
       return updateNode(doc, command.id, command.patch);
     case 'updateCable':
       return updateCable(doc, command.id, command.patch);
+    case 'splitCable':
+      return splitCable(doc, command.id, command.ratio);
     case 'updateDetails':
       return updateDetails(doc, command.patch);
     case 'updateSettings':

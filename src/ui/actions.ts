@@ -114,3 +114,18 @@ export function selectPath(id: Id): void {
   }
   s.setSelection([...nodes, ...r.path]);
 }
+
+/** Replaces a cable by two through a new junction, halfway; the lengths are edited afterwards. */
+export function splitWithJunction(id: Id): void {
+  const s = store.getState();
+  const out = s.dispatch({ type: 'splitCable', id });
+  if (!out.ok) return;
+  const [junctionId, onwardId] = out.created;
+  const up = out.doc.cables.find((c) => c.id === id);
+  const onward = out.doc.cables.find((c) => c.id === onwardId);
+  if (!junctionId || !up || !onward) return;
+  s.setSelection([junctionId]);
+  s.notify(
+    `${id} now runs ${up.lengthM} m to junction ${junctionId}, then ${onwardId} ${onward.lengthM} m on; select either cable to set its length.`,
+  );
+}

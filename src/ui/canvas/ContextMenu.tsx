@@ -1,7 +1,17 @@
 import { useEffect, useRef } from 'react';
 import type { Id } from '../../model/types.ts';
 import { editorStore } from '../../store/editorStore.ts';
-import { addPart, copy, deleteSelection, duplicate, paste, selectAll, selectPath, tidy } from '../actions.ts';
+import {
+  addPart,
+  copy,
+  deleteSelection,
+  duplicate,
+  paste,
+  selectAll,
+  selectPath,
+  splitWithJunction,
+  tidy,
+} from '../actions.ts';
 import { canvas } from '../canvasApi.ts';
 import { PARTS } from '../parts.ts';
 import { shortcutText } from '../shortcuts.ts';
@@ -26,7 +36,12 @@ function itemsFor(target: MenuTarget): (Item | 'gap')[] {
     ];
   }
   if (target.kind === 'cable') {
-    return [{ label: 'Delete cable', run: deleteSelection, keys: shortcutText('delete'), danger: true }];
+    const id = target.id;
+    return [
+      { label: 'Split with a junction', run: () => splitWithJunction(id) },
+      'gap',
+      { label: 'Delete cable', run: deleteSelection, keys: shortcutText('delete'), danger: true },
+    ];
   }
   const node = editorStore.getState().doc.nodes.find((n) => n.id === target.id);
   if (!node) return [];
