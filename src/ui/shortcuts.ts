@@ -50,7 +50,7 @@ export const SHORTCUTS: readonly Shortcut[] = [
   { id: 'nudge', keys: 'Arrow keys', what: 'Move the selection one grid step' },
   { id: 'nudgeFar', keys: `${SHIFT}Arrow keys`, what: 'Move the selection four grid steps' },
   { id: 'save', keys: `${MOD}S`, what: 'Save the project file' },
-  { id: 'saveAs', keys: `${SHIFT}${MOD}S`, what: 'Save as a new file' },
+  { id: 'saveAs', keys: IS_MAC ? `${SHIFT}${MOD}S` : 'Ctrl+Shift+S', what: 'Save as a new file' },
   { id: 'open', keys: `${MOD}O`, what: 'Open a project file' },
   { id: 'fit', keys: `${SHIFT}1`, what: 'Fit the diagram to the screen' },
   {

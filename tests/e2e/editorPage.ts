@@ -1,5 +1,10 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { expect } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
+import type { ProjectDocument } from '../../src/model/types.ts';
+import { serializeDocument } from '../../src/model/serializeDocument.ts';
 
 /** Page object for the editor's canvas, tray and top bar. */
 export class EditorPage {
@@ -13,6 +18,29 @@ export class EditorPage {
       await this.page.getByTestId('cautions-ok').click();
     }
     await this.page.locator('.react-flow__node').first().waitFor();
+  }
+
+  /** Opens a document through the file picker, as a user would. */
+  async openDocument(doc: ProjectDocument, name = 'test.dropline.json') {
+    const file = join(mkdtempSync(join(tmpdir(), 'dropline-open-')), name);
+    writeFileSync(file, serializeDocument(doc));
+    await this.page.getByTestId('open-file-input').setInputFiles(file);
+    await expect.poll(() => this.page.getByTestId('project-title').textContent()).toBe(doc.details.title);
+    await this.page.waitForTimeout(100);
+  }
+
+  /** The ids of the nodes on the canvas, sorted. */
+  async nodeIds(): Promise<string[]> {
+    const ids = await this.page
+      .locator('.react-flow__node')
+      .evaluateAll((els) => els.map((e) => e.getAttribute('data-id') ?? ''));
+    return ids.sort();
+  }
+
+  /** Right-clicks a cable on its last straight run, just above the element it feeds. */
+  async rightClickCable(id: string, to: string) {
+    const handle = await this.centreOf(this.node(to).locator('.react-flow__handle-top'));
+    await this.page.mouse.click(handle.x, handle.y - 12, { button: 'right' });
   }
 
   node(id: string): Locator {
