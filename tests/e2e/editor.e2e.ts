@@ -39,8 +39,8 @@ test('the demo opens with live cable labels that match the engine', async () => 
   const label = ed.cableLabel(cable.id);
   await label.waitFor();
   const lines = label.locator('.ed-edge-line');
-  const [ib, dropV, dropPct] = await ed.numbersIn(lines.nth(0));
-  const [cum] = await ed.numbersIn(lines.nth(1));
+  const [ib, dropV] = await ed.numbersIn(lines.nth(0));
+  const [cum, dropPct] = await ed.numbersIn(lines.nth(1));
   const r = results.cables[cable.id]!;
   expect(ib).toBeCloseTo(r.ibA, r.ibA >= 100 ? 0 : r.ibA >= 10 ? 1 : 2);
   expect(dropV).toBeCloseTo(r.dropV, 2);

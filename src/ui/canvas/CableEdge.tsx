@@ -27,24 +27,43 @@ function CableEdgeView(props: EdgeProps<CableFlowEdge>) {
       {data?.showLabel && data.lines.length > 0 && (
         <EdgeLabelRenderer>
           <div
-            className={`ed-edge-label${selected ? ' is-selected' : ''}`}
+            className={`ed-edge-label${selected ? ' is-selected' : ''}${data.detail < 2 ? ' is-short' : ''}`}
             data-testid={`cable-label-${id}`}
+            title={data.title}
             style={{
-              transform: `translate(-50%, -100%) translate(${targetX}px, ${targetY - 14}px)`,
+              transform:
+                data.labelSide === 'beside'
+                  ? // Beside the junction dot, on the side away from the sending end, its foot level
+                    // with the dot's, so it clears the label above the next element down.
+                    sourceX >= targetX
+                    ? `translate(-100%, -100%) translate(${targetX - 12}px, ${targetY + 16}px)`
+                    : `translate(0, -100%) translate(${targetX + 12}px, ${targetY + 16}px)`
+                  : `translate(-50%, -100%) translate(${targetX}px, ${targetY - 6 - data.raisePx}px)`,
               borderColor: look.colour,
             }}
           >
-            <span className="ed-edge-name">{data.cable.name}</span>
-            {data.lines.slice(0, data.detail === 2 ? data.lines.length : 1).map((line, i) => (
-              <span key={i} className="ed-edge-line">
-                {i === data.lines.length - 1 && data.detail === 2 ? (
-                  <span style={{ color: look.colour }} aria-label={look.word}>
-                    {look.glyph}{' '}
+            {data.detail === 2 ? (
+              <>
+                <span className="ed-edge-name">{data.heading}</span>
+                {data.lines.map((line, i) => (
+                  <span key={i} className="ed-edge-line">
+                    {i === data.lines.length - 1 ? (
+                      <span style={{ color: look.colour }} aria-label={look.word}>
+                        {look.glyph}{' '}
+                      </span>
+                    ) : null}
+                    {line}
                   </span>
-                ) : null}
-                {line}
+                ))}
+              </>
+            ) : (
+              <span className="ed-edge-line">
+                <span style={{ color: look.colour }} aria-label={look.word}>
+                  {look.glyph}{' '}
+                </span>
+                {data.short}
               </span>
-            ))}
+            )}
           </div>
         </EdgeLabelRenderer>
       )}

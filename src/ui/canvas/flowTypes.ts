@@ -18,8 +18,18 @@ export type CableEdgeData = {
   cable: Cable;
   status: Status | null;
   lines: string[];
+  /** The one figure shown at middle zoom. */
+  short: string;
+  /** First label line: the cable's own name when it says more than its far end's, else its id; and its length. */
+  heading: string;
+  /** Tooltip: what the figures mean. */
+  title: string;
   detail: Detail;
   showLabel: boolean;
+  /** A cable into a junction labels beside the dot, leaving the space above for the onward cable. */
+  labelSide: 'above' | 'beside';
+  /** Extra lift in px, so labels of neighbouring loads fed from one board alternate in height. */
+  raisePx: number;
 };
 
 export type ElementFlowNode = Node<ElementNodeData, 'element'>;

@@ -25,9 +25,10 @@ export function cableLabel(
   if (r.status === null && !(r.dropV > 0)) return ['no result: see findings'];
   switch (mode) {
     case 'drop':
+      // Two short lines rather than one long one, so labels of loads side by side do not collide.
       return [
-        `${fmtAmps(r.ibA)} A · ${fmt(r.dropV, 2)} V ${fmt(r.dropPct.value, 2)} %`,
-        `Σ ${fmt(r.cumulativePct.value, 2)} %`,
+        `${fmtAmps(r.ibA)} A · ${fmt(r.dropV, 2)} V`,
+        `Σ ${fmt(r.cumulativePct.value, 2)} % (+${fmt(r.dropPct.value, 2)} %)`,
       ];
     case 'current': {
       const c = r.currentsA;
@@ -68,5 +69,44 @@ export function nodeLabel(r: NodeResult | undefined, mode: LabelMode): string {
       const f = r.protection?.fault;
       return `Ipf ${f ? fmt(f.maxA / 1000, 2) : '–'} kA`;
     }
+  }
+}
+
+/** The one figure a cable shows at middle zoom, where a full label would crowd its neighbours. */
+export function cableShortLabel(
+  r: CableResult | undefined,
+  mode: LabelMode,
+  far: NodeResult | undefined,
+): string {
+  if (!r || (r.status === null && !(r.dropV > 0))) return 'no result';
+  switch (mode) {
+    case 'drop':
+      // The far end's badge already shows Σ; the cable says what it carries and adds.
+      return `${fmtAmps(r.ibA)} A · +${fmt(r.dropPct.value, 2)} %`;
+    case 'current':
+      return `Ib ${fmtAmps(r.ibA)} A`;
+    case 'zs':
+    case 'fault':
+      return nodeLabel(far, mode);
+    case 'capacity': {
+      const use = r.protection?.capacityUse;
+      return use === null || use === undefined ? 'Ib/Iz –' : `Ib/Iz ${fmt(use * 100, 0)} %`;
+    }
+  }
+}
+
+/** What the label's figures mean, for its tooltip: each percentage with its basis. */
+export function cableLabelTitle(mode: LabelMode): string {
+  switch (mode) {
+    case 'drop':
+      return "Design current Ib · drop along this cable in V; Σ drop from the origin to its far end, in % of U0 (+ this cable's share)";
+    case 'current':
+      return 'Design current Ib, and the current in each line conductor and the neutral';
+    case 'zs':
+      return 'Earth fault loop impedance Zs at the far end / the largest Zs its device allows';
+    case 'fault':
+      return 'Prospective fault current at the far end';
+    case 'capacity':
+      return 'Design current Ib and current-carrying capacity Iz; Ib/Iz in % of Iz';
   }
 }

@@ -8,7 +8,8 @@ import type { Id, NodeElement, Position, ProjectDocument } from '../../model/typ
 import { NODE_SIZE } from '../../model/layout.ts';
 import type { Results } from '../../solver/results.ts';
 import type { LabelMode } from '../../store/viewTypes.ts';
-import { cableLabel, nodeLabel } from './labels.ts';
+import { cableLabel, cableLabelTitle, cableShortLabel, fmt, nodeLabel } from './labels.ts';
+import { labelRaises } from './labelLayout.ts';
 import type { CableEdgeData, CableFlowEdge, Detail, ElementFlowNode, ElementNodeData } from './flowTypes.ts';
 import { Position as Side } from '@xyflow/react';
 
@@ -62,12 +63,22 @@ function sameData(a: ElementNodeData, b: ElementNodeData): boolean {
   );
 }
 
+/** Lengths as typed, but never more than two decimals (a split cable's 13.33 m). */
+function fmtLength(m: number): string {
+  return Number.isInteger(m) ? String(m) : fmt(m, 2).replace(/0$/, '');
+}
+
 function sameEdgeData(a: CableEdgeData, b: CableEdgeData): boolean {
   return (
     a.cable === b.cable &&
     a.status === b.status &&
     a.detail === b.detail &&
     a.showLabel === b.showLabel &&
+    a.short === b.short &&
+    a.heading === b.heading &&
+    a.title === b.title &&
+    a.labelSide === b.labelSide &&
+    a.raisePx === b.raisePx &&
     a.lines.length === b.lines.length &&
     a.lines.every((l, i) => l === b.lines[i])
   );
@@ -139,18 +150,46 @@ export function createFlowBuilder() {
       const down = kinds.get(c.to);
       return up !== undefined && down !== undefined && up !== 'load' && down !== 'supply';
     });
-    const list = drawable.map((cable) => {
+    const byId = new Map(doc.nodes.map((n) => [n.id, n]));
+    const texts = drawable.map((cable) => {
       const r = results.cables[cable.id];
+      const far = results.nodes[cable.to];
+      const to = byId.get(cable.to)!;
+      const full = cable.lengthM > 0 ? cableLabel(r, labelMode, far) : ['length not set'];
+      const short = cable.lengthM > 0 ? cableShortLabel(r, labelMode, far) : 'length not set';
+      const named = cable.name && cable.name !== cable.id && cable.name !== to.name;
+      const length = cable.lengthM > 0 ? ` · ${fmtLength(cable.lengthM)} m` : '';
+      const heading = `${named ? cable.name : cable.id}${length}`;
+      return { cable, r, to, full, short, heading };
+    });
+    const raises =
+      showLabels && detail > 0
+        ? labelRaises(
+            texts
+              .filter((t) => t.to.kind !== 'junction')
+              .map((t) => ({
+                id: t.cable.id,
+                to: t.to,
+                heading: detail === 2 ? t.heading : '',
+                // The status glyph and a space lead the last line.
+                lines: (detail === 2 ? t.full : [t.short]).map((l, i, all) =>
+                  i === all.length - 1 ? `▲ ${l}` : l,
+                ),
+              })),
+          )
+        : null;
+    const list = texts.map(({ cable, r, to, full, short, heading }) => {
       const data: CableEdgeData = {
         cable,
         status: r?.status ?? null,
-        lines: !showLabels
-          ? []
-          : cable.lengthM > 0
-            ? cableLabel(r, labelMode, results.nodes[cable.to])
-            : ['length not set'],
+        lines: showLabels ? full : [],
+        short: showLabels ? short : '',
+        heading,
+        title: cableLabelTitle(labelMode),
         detail,
         showLabel: showLabels && detail > 0,
+        labelSide: to.kind === 'junction' ? 'beside' : 'above',
+        raisePx: raises?.get(cable.id) ?? 0,
       };
       const isSelected = selected.has(cable.id);
       const prev = edgeCache.get(cable.id);
