@@ -108,6 +108,146 @@ export interface DropState {
   status: Int8Array;
   /** Per cable: longest length keeping every judged load below within its limit; NaN = none. */
   maxLengthM: Float64Array;
+
+  // Fields read from the document in one pass, in document order, while the index is built
+  // (validateElements.ts reads them; the passes after it touch no element object on the fast path).
+  /** 1 where an element's fields did not pass the fast checks, so the careful check must run. */
+  nodeCheck: Uint8Array;
+  cableCheck: Uint8Array;
+  /** A load's demand as typed (value, unit code 0 W, 1 kW, 2 kVA, 3 A), power factor, demand factor. */
+  loadValue: Float64Array;
+  loadUnit: Uint8Array;
+  loadPf: Float64Array;
+  loadDf: Float64Array;
+  /** Phases a load declares (7 three-phase, else the bit of its phase), before the supply is known. */
+  loadDeclared: Uint8Array;
+  /** 0 lighting, 1 other, 2 neither (judged as lighting, with a finding). */
+  loadCategory: Uint8Array;
+  /** A cable's `phases` field: 1, 3, or 0 for anything else. */
+  cablePhasesField: Uint8Array;
+  /** Scratch for the passes: phases needed below a node, 1 where a three-phase load or cable is below. */
+  needBelow: Uint8Array;
+  threeBelow: Uint8Array;
+  /** Scratch for the judge: smallest slack below a node per phase, % of U0 (total and branch). */
+  slackPct: Float64Array;
+  slackBranchPct: Float64Array;
+  /**
+   * The reached nodes in the order the numeric passes walk them (`orderLength` long, parents
+   * first): document order when every tree cable runs from a lower to a higher position and each
+   * node's children come in cable order, so the passes read memory front to back and every sum
+   * adds in the same order as over `order`; otherwise a copy of `order`.
+   */
+  walk: Int32Array;
+  /** True when `walk` is document order rather than breadth-first order. */
+  walkIsDocumentOrder: boolean;
+  /** Position of each reached node in `order`, filled only when findings need sorting (see findingOrder.ts). */
+  rank: Int32Array;
+  rankReady: boolean;
+  /** Scratch for the topology: compressed child lists. */
+  childStart: Int32Array;
+  childCables: Int32Array;
+}
+
+/**
+ * Bump allocator over one ArrayBuffer: one external allocation per solve instead of fifty, which
+ * keeps the garbage collector from being prompted by every typed array.
+ */
+class Slab {
+  private offset = 0;
+  constructor(private readonly buffer: ArrayBuffer | undefined) {}
+  get bytes(): number {
+    return this.offset;
+  }
+  private take(bytes: number): number {
+    const at = this.offset;
+    this.offset += (bytes + 7) & ~7;
+    return at;
+  }
+  f64(length: number): Float64Array {
+    const at = this.take(length * 8);
+    return this.buffer ? new Float64Array(this.buffer, at, length) : new Float64Array(0);
+  }
+  i32(length: number): Int32Array {
+    const at = this.take(length * 4);
+    return this.buffer ? new Int32Array(this.buffer, at, length) : new Int32Array(0);
+  }
+  u8(length: number): Uint8Array {
+    const at = this.take(length);
+    return this.buffer ? new Uint8Array(this.buffer, at, length) : new Uint8Array(0);
+  }
+  i8(length: number): Int8Array {
+    const at = this.take(length);
+    return this.buffer ? new Int8Array(this.buffer, at, length) : new Int8Array(0);
+  }
+}
+
+export type DropArrays = ReturnType<typeof layout>;
+
+function layout(a: Slab, n: number, m: number) {
+  return {
+    nodeKind: a.u8(n).fill(KIND_INVALID),
+    parentCable: a.i32(n).fill(-1),
+    cableFrom: a.i32(m).fill(-1),
+    cableTo: a.i32(m).fill(-1),
+    order: a.i32(n),
+    reached: a.u8(n),
+    nodePhases: a.u8(n),
+    cablePhases: a.u8(m),
+    cableBad: a.u8(m),
+    incomplete: a.u8(n),
+    cableZr: a.f64(m),
+    cableZx: a.f64(m),
+    cableLengthM: a.f64(m),
+    loadCurrentA: a.f64(n),
+    loadPhiRad: a.f64(n),
+    loadValid: a.u8(n),
+    loadMask: a.u8(n),
+    diversity: a.f64(n).fill(1),
+    iRe: a.f64(n * 3),
+    iIm: a.f64(n * 3),
+    dropIScale: a.f64(m).fill(1),
+    nRe: a.f64(m),
+    nIm: a.f64(m),
+    dvRe: a.f64(m * 3),
+    dvIm: a.f64(m * 3),
+    dropProj: a.f64(m * 3),
+    cum: a.f64(n * 3),
+    vRe: a.f64(n * 3),
+    vIm: a.f64(n * 3),
+    pathLengthM: a.f64(n),
+    branchBase: a.f64(n * 3),
+    worstPhase: a.i8(n).fill(-1),
+    loadCumPct: a.f64(n),
+    loadLimitPct: a.f64(n),
+    loadBranchPct: a.f64(n),
+    budgetUsed: a.f64(n),
+    status: a.i8(n).fill(-1),
+    maxLengthM: a.f64(m).fill(NaN),
+    nodeCheck: a.u8(n),
+    cableCheck: a.u8(m),
+    loadValue: a.f64(n),
+    loadUnit: a.u8(n),
+    loadPf: a.f64(n),
+    loadDf: a.f64(n),
+    loadDeclared: a.u8(n),
+    loadCategory: a.u8(n),
+    cablePhasesField: a.u8(m),
+    needBelow: a.u8(n),
+    threeBelow: a.u8(n),
+    slackPct: a.f64(n * 3),
+    slackBranchPct: a.f64(n * 3),
+    walk: a.i32(n),
+    rank: a.i32(n),
+    childStart: a.i32(n + 1),
+    childCables: a.i32(m),
+  };
+}
+
+/** Every typed array of a state for `n` nodes and `m` cables, carved from one buffer. */
+export function allocateArrays(n: number, m: number): DropArrays {
+  const measure = new Slab(undefined);
+  layout(measure, n, m);
+  return layout(new Slab(new ArrayBuffer(measure.bytes)), n, m);
 }
 
 export type { Load };

@@ -11,17 +11,34 @@
  * cumulative drop is their sum and the voltage shown is U0 minus it.
  */
 import type { DropState } from './dropState.ts';
-import { KIND_BOARD, PHASE_COS, PHASE_SIN } from './dropState.ts';
+import { KIND_BOARD, KIND_LOAD, PHASE_COS, PHASE_SIN } from './dropState.ts';
+import { assignCablePhases, supplyMask } from './phases.ts';
+import { setLoadCurrent } from './validateElements.ts';
+import { FindingTail } from './findingOrder.ts';
 
+/**
+ * The upward pass, leaves first: each reached load's phases and current phasors, the phases
+ * needed below every node (for phases.ts), and the demand summed into every node, × board
+ * diversity.
+ */
 export function sumDemand(s: DropState): void {
-  const { iRe, iIm, order } = s;
-  // Load phasors were set by validateNodes; here they are summed from the leaves up.
+  const { iRe, iIm, walk, nodeKind, parentCable, cableFrom, loadMask, nodeCheck, loadDeclared } = s;
+  const { needBelow, threeBelow, cablePhasesField, diversity } = s;
+  const root = s.root;
+  const single = supplyMask(s) === 1;
   for (let k = s.orderLength - 1; k >= 0; k--) {
-    const v = order[k] as number;
+    const v = walk[k] as number;
     const b = v * 3;
-    const kind = s.nodeKind[v];
-    if (kind === KIND_BOARD) {
-      const d = s.diversity[v] as number;
+    const kind = nodeKind[v];
+    if (kind === KIND_LOAD) {
+      const declared = loadDeclared[v] as number;
+      const mask = single && declared !== 7 ? 1 : declared;
+      loadMask[v] = mask;
+      needBelow[v] = mask;
+      if (mask === 7) threeBelow[v] = 1;
+      if (!nodeCheck[v]) setLoadCurrent(s, v, mask);
+    } else if (kind === KIND_BOARD) {
+      const d = diversity[v] as number;
       if (d !== 1) {
         for (let p = 0; p < 3; p++) {
           iRe[b + p] = (iRe[b + p] as number) * d;
@@ -29,9 +46,12 @@ export function sumDemand(s: DropState): void {
         }
       }
     }
-    const j = s.parentCable[v] as number;
-    if (v === s.root || j < 0) continue;
-    const ub = (s.cableFrom[j] as number) * 3;
+    const j = parentCable[v] as number;
+    if (v === root || j < 0) continue;
+    const u = cableFrom[j] as number;
+    needBelow[u] = (needBelow[u] as number) | (needBelow[v] as number);
+    if (threeBelow[v] || cablePhasesField[j] === 3) threeBelow[u] = 1;
+    const ub = u * 3;
     iRe[ub] = (iRe[ub] as number) + (iRe[b] as number);
     iIm[ub] = (iIm[ub] as number) + (iIm[b] as number);
     iRe[ub + 1] = (iRe[ub + 1] as number) + (iRe[b + 1] as number);
@@ -130,31 +150,55 @@ function drop(s: DropState, cb: number, p: number, zr: number, zx: number, jr: n
   s.dropProj[cb + p] = re * (PHASE_COS[p] as number) + im * (PHASE_SIN[p] as number);
 }
 
+/**
+ * The downward pass, parents first: each cable's phases (phases.ts), its segment drop, and the
+ * cumulative drop, voltage, route length and branch base at every node.
+ */
 export function accumulate(s: DropState): void {
-  const { cum, vRe, vIm, dvRe, dvIm, dropProj, branchBase } = s;
+  const { cum, vRe, vIm, dvRe, dvIm, dropProj, branchBase, walk, parentCable, cableFrom } = s;
+  const { nodeKind, cableBad, incomplete, pathLengthM, cableLengthM } = s;
   if (s.root < 0) return;
+  s.nodePhases[s.root] = supplyMask(s);
   const rb = s.root * 3;
   for (let p = 0; p < 3; p++) {
     vRe[rb + p] = s.u0V * (PHASE_COS[p] as number);
     vIm[rb + p] = s.u0V * (PHASE_SIN[p] as number);
   }
+  const tail = new FindingTail(s.findings);
   for (let k = 1; k < s.orderLength; k++) {
-    const v = s.order[k] as number;
-    const j = s.parentCable[v] as number;
-    const u = s.cableFrom[j] as number;
+    const v = walk[k] as number;
+    const j = parentCable[v] as number;
+    const u = cableFrom[j] as number;
+    assignCablePhases(s, v, j, u);
+    tail.tag(v);
     const b = v * 3;
     const ub = u * 3;
     const cb = j * 3;
-    const board = s.nodeKind[v] === KIND_BOARD;
-    if (!s.cableBad[j]) segmentDrop(s, v, j);
-    for (let p = 0; p < 3; p++) {
-      const c = (cum[ub + p] as number) + (dropProj[cb + p] as number);
-      cum[b + p] = c;
-      vRe[b + p] = (vRe[ub + p] as number) - (dvRe[cb + p] as number);
-      vIm[b + p] = (vIm[ub + p] as number) - (dvIm[cb + p] as number);
-      branchBase[b + p] = board ? c : (branchBase[ub + p] as number);
+    const bad = cableBad[j] as number;
+    if (!bad) segmentDrop(s, v, j);
+    const c0 = (cum[ub] as number) + (dropProj[cb] as number);
+    const c1 = (cum[ub + 1] as number) + (dropProj[cb + 1] as number);
+    const c2 = (cum[ub + 2] as number) + (dropProj[cb + 2] as number);
+    cum[b] = c0;
+    cum[b + 1] = c1;
+    cum[b + 2] = c2;
+    vRe[b] = (vRe[ub] as number) - (dvRe[cb] as number);
+    vRe[b + 1] = (vRe[ub + 1] as number) - (dvRe[cb + 1] as number);
+    vRe[b + 2] = (vRe[ub + 2] as number) - (dvRe[cb + 2] as number);
+    vIm[b] = (vIm[ub] as number) - (dvIm[cb] as number);
+    vIm[b + 1] = (vIm[ub + 1] as number) - (dvIm[cb + 1] as number);
+    vIm[b + 2] = (vIm[ub + 2] as number) - (dvIm[cb + 2] as number);
+    if (nodeKind[v] === KIND_BOARD) {
+      branchBase[b] = c0;
+      branchBase[b + 1] = c1;
+      branchBase[b + 2] = c2;
+    } else {
+      branchBase[b] = branchBase[ub] as number;
+      branchBase[b + 1] = branchBase[ub + 1] as number;
+      branchBase[b + 2] = branchBase[ub + 2] as number;
     }
-    s.incomplete[v] = (s.incomplete[u] as number) | (s.cableBad[j] as number);
-    s.pathLengthM[v] = (s.pathLengthM[u] as number) + (s.cableLengthM[j] as number);
+    incomplete[v] = (incomplete[u] as number) | bad;
+    pathLengthM[v] = (pathLengthM[u] as number) + (cableLengthM[j] as number);
   }
+  tail.settle(s, false);
 }

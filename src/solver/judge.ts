@@ -9,6 +9,7 @@ import type { DropState } from './dropState.ts';
 import { KIND_BOARD, KIND_LOAD } from './dropState.ts';
 import { shown } from './findings.ts';
 import { nodeLabel } from './topology.ts';
+import { FindingTail } from './findingOrder.ts';
 
 export const STATUS_WORDS = ['within', 'close', 'over'] as const;
 
@@ -19,40 +20,41 @@ export function loadPhaseMask(s: DropState, v: number): number {
 
 export function judgeLoads(s: DropState): void {
   const { findings, profile } = s;
-  const n = s.nodeCount;
   const pctPerV = 100 / s.u0V;
   const branchLimit = profile.branchPct;
-  const slack = new Float64Array(n * 3).fill(Infinity);
-  const slackB = branchLimit === undefined ? undefined : new Float64Array(n * 3).fill(Infinity);
+  const slack = s.slackPct.fill(Infinity);
+  const slackB = branchLimit === undefined ? undefined : s.slackBranchPct.fill(Infinity);
   const close = s.closeThreshold;
+  const { walk, nodeKind, cum, branchBase, parentCable, cableFrom, status, loadCategory } = s;
+  const root = s.root;
+  const tail = new FindingTail(findings);
 
   for (let k = s.orderLength - 1; k >= 0; k--) {
-    const v = s.order[k] as number;
+    const v = walk[k] as number;
     const b = v * 3;
-    if (s.nodeKind[v] === KIND_LOAD) {
+    if (nodeKind[v] === KIND_LOAD) {
       const mask = loadPhaseMask(s, v);
       let worst = -1;
       let worstPct = -Infinity;
       let branchWorst = 0;
       for (let p = 0; p < 3; p++) {
         if (!(mask & (1 << p))) continue;
-        const pct = (s.cum[b + p] as number) * pctPerV;
+        const pct = (cum[b + p] as number) * pctPerV;
         if (pct > worstPct) {
           worstPct = pct;
           worst = p;
         }
-        const br = ((s.cum[b + p] as number) - (s.branchBase[b + p] as number)) * pctPerV;
+        const br = ((cum[b + p] as number) - (branchBase[b + p] as number)) * pctPerV;
         if (br > branchWorst) branchWorst = br;
       }
-      const el = s.nodes[v] as { category?: unknown };
-      let category: 'lighting' | 'other' = 'lighting';
-      if (el.category === 'other' || el.category === 'lighting') category = el.category;
-      else
+      const categoryCode = loadCategory[v];
+      const category: 'lighting' | 'other' = categoryCode === 1 ? 'other' : 'lighting';
+      if (categoryCode === 2)
         findings.push({
           code: 'badCategory',
           severity: 'warning',
           elementId: s.nodeIds[v] as string,
-          message: `${nodeLabel(s, v)}: category must be lighting or other, got ${shown(el.category)}; it is judged against the stricter lighting limit.`,
+          message: `${nodeLabel(s, v)}: category must be lighting or other, got ${shown((s.nodes[v] as { category?: unknown }).category)}; it is judged against the stricter lighting limit.`,
         });
       const allowance =
         profile.allowsLongRunAllowance && s.longRunAllowance
@@ -73,11 +75,10 @@ export function judgeLoads(s: DropState): void {
         s.status[v] = code;
         for (let p = 0; p < 3; p++) {
           if (!(mask & (1 << p))) continue;
-          const pct = (s.cum[b + p] as number) * pctPerV;
+          const pct = (cum[b + p] as number) * pctPerV;
           slack[b + p] = limit - pct;
           if (slackB && branchLimit !== undefined)
-            slackB[b + p] =
-              branchLimit - ((s.cum[b + p] as number) - (s.branchBase[b + p] as number)) * pctPerV;
+            slackB[b + p] = branchLimit - ((cum[b + p] as number) - (branchBase[b + p] as number)) * pctPerV;
         }
         if (code === 2)
           findings.push({
@@ -95,12 +96,13 @@ export function judgeLoads(s: DropState): void {
           });
       }
     }
-    const j = s.parentCable[v] as number;
-    if (v === s.root || j < 0) continue;
-    const u = s.cableFrom[j] as number;
-    if ((s.status[v] as number) > (s.status[u] as number)) s.status[u] = s.status[v] as number;
+    tail.tag(v);
+    const j = parentCable[v] as number;
+    if (v === root || j < 0) continue;
+    const u = cableFrom[j] as number;
+    if ((status[v] as number) > (status[u] as number)) status[u] = status[v] as number;
     const ub = u * 3;
-    const isBoard = s.nodeKind[v] === KIND_BOARD;
+    const isBoard = nodeKind[v] === KIND_BOARD;
     for (let p = 0; p < 3; p++) {
       if ((slack[b + p] as number) < (slack[ub + p] as number)) slack[ub + p] = slack[b + p] as number;
       if (slackB && !isBoard && (slackB[b + p] as number) < (slackB[ub + p] as number))
@@ -108,6 +110,7 @@ export function judgeLoads(s: DropState): void {
     }
     headroom(s, j, v, slack, slackB, pctPerV);
   }
+  tail.settle(s, true);
 }
 
 function headroom(

@@ -13,18 +13,18 @@
  */
 import type { ProjectDocument } from '../model/types.ts';
 import { STANDARD_EDITIONS } from '../model/cautions.ts';
-import type { CatalogueSet } from '../catalogue/catalogueSet.ts';
+import type { CatalogueSet, ConductorRow } from '../catalogue/catalogueSet.ts';
 import { BUILTIN_CATALOGUE } from '../catalogue/builtinConductors.ts';
 import { limitProfile } from '../catalogue/limits.ts';
 import type { LimitProfileId } from '../model/types.ts';
 import type { CableResult, LoadResult, NodeResult, Results } from './results.ts';
 import type { DropState } from './dropState.ts';
-import { KIND_INVALID, KIND_LOAD } from './dropState.ts';
+import { KIND_INVALID, KIND_LOAD, allocateArrays } from './dropState.ts';
 import type { DropFinding } from './findings.ts';
 import { shown } from './findings.ts';
 import { buildTopology, nodeLabel } from './topology.ts';
 import { validateCables, validateNodes } from './validateElements.ts';
-import { assignPhases } from './phases.ts';
+import { phaseIgnoredFindings } from './phases.ts';
 import { accumulate, sumDemand } from './flow.ts';
 import { judgeLoads } from './judge.ts';
 import { CableResultView, LoadResultView, NodeResultView } from './resultObjects.ts';
@@ -100,49 +100,14 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
     cableCount: m,
     nodeIndex: new Map(),
     cableIndex: new Map(),
-    nodeKind: new Uint8Array(n).fill(KIND_INVALID),
     nodeIds: new Array<string>(n).fill(''),
     cableIds: new Array<string>(m).fill(''),
-    parentCable: new Int32Array(n).fill(-1),
-    cableFrom: new Int32Array(m).fill(-1),
-    cableTo: new Int32Array(m).fill(-1),
-    order: new Int32Array(n),
+    cableRow: new Array<ConductorRow | undefined>(m).fill(undefined),
     orderLength: 0,
     root: -1,
-    reached: new Uint8Array(n),
-    nodePhases: new Uint8Array(n),
-    cablePhases: new Uint8Array(m),
-    cableBad: new Uint8Array(m),
-    incomplete: new Uint8Array(n),
-    cableRow: new Array(m).fill(undefined),
-    cableZr: new Float64Array(m),
-    cableZx: new Float64Array(m),
-    cableLengthM: new Float64Array(m),
-    loadCurrentA: new Float64Array(n),
-    loadPhiRad: new Float64Array(n),
-    loadValid: new Uint8Array(n),
-    loadMask: new Uint8Array(n),
-    diversity: new Float64Array(n).fill(1),
-    iRe: new Float64Array(n * 3),
-    iIm: new Float64Array(n * 3),
-    dropIScale: new Float64Array(m).fill(1),
-    nRe: new Float64Array(m),
-    nIm: new Float64Array(m),
-    dvRe: new Float64Array(m * 3),
-    dvIm: new Float64Array(m * 3),
-    dropProj: new Float64Array(m * 3),
-    cum: new Float64Array(n * 3),
-    vRe: new Float64Array(n * 3),
-    vIm: new Float64Array(n * 3),
-    pathLengthM: new Float64Array(n),
-    branchBase: new Float64Array(n * 3),
-    worstPhase: new Int8Array(n).fill(-1),
-    loadCumPct: new Float64Array(n),
-    loadLimitPct: new Float64Array(n),
-    loadBranchPct: new Float64Array(n),
-    budgetUsed: new Float64Array(n),
-    status: new Int8Array(n).fill(-1),
-    maxLengthM: new Float64Array(m).fill(NaN),
+    walkIsDocumentOrder: false,
+    rankReady: false,
+    ...allocateArrays(n, m),
   };
 }
 
@@ -278,8 +243,8 @@ export function solveDrop(doc: ProjectDocument, catalogue?: CatalogueSet): Resul
     readVoltages(s, settings);
     validateNodes(s);
     validateCables(s);
-    assignPhases(s);
     sumDemand(s);
+    phaseIgnoredFindings(s);
     accumulate(s);
     judgeLoads(s);
     const results = buildResults(s);

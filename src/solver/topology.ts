@@ -7,6 +7,7 @@ import type { DropState } from './dropState.ts';
 import { KIND_BOARD, KIND_INVALID, KIND_JUNCTION, KIND_LOAD, KIND_SUPPLY } from './dropState.ts';
 import type { DropFinding } from './findings.ts';
 import { shown } from './findings.ts';
+import { RowMemo, readCable, readNode } from './readFields.ts';
 
 function kindCode(kind: unknown): number | undefined {
   switch (kind) {
@@ -34,38 +35,84 @@ export function nodeLabel(s: DropState, i: number): string {
   return `${word} ${s.nodeIds[i]}${name}`;
 }
 
-function isObject(v: unknown): v is Record<string, unknown> {
+type Loose = Record<string, unknown>;
+
+function isObject(v: unknown): v is Loose {
   return typeof v === 'object' && v !== null && !Array.isArray(v);
 }
 
-/** Fills the index, kind, parent and order arrays of `s` and pushes topology findings. */
+/** Message for a node the index leaves out (no id, unknown kind). */
+function malformedNode(el: unknown, i: number, id: unknown): DropFinding {
+  return {
+    code: 'malformedElement',
+    severity: 'error',
+    ...(typeof id === 'string' && id !== '' ? { elementId: id } : {}),
+    message:
+      typeof id !== 'string' || id === ''
+        ? `node number ${i + 1} in the list has no id (got ${shown(id)}); give it a unique text id.`
+        : `node ${id}: kind must be supply, board, junction or load, got ${shown(isObject(el) ? el.kind : el)}.`,
+  };
+}
+
+/**
+ * Adds `id -> i` to `index` unless the id is already there (the first holder keeps it). One map
+ * operation per new id: the set is tried and the size tells whether the id was new. On the first
+ * repeat the first holder is found by a scan and put back, and from then on each claim asks the
+ * map first, so a file full of repeats still costs linear time.
+ */
+class IdClaims {
+  private careful = false;
+  constructor(
+    private readonly index: Map<string, number>,
+    private readonly ids: readonly string[],
+  ) {}
+
+  claim(id: string, i: number): boolean {
+    const index = this.index;
+    if (this.careful) {
+      if (index.has(id)) return false;
+      index.set(id, i);
+      return true;
+    }
+    const before = index.size;
+    index.set(id, i);
+    if (index.size !== before) return true;
+    let first = 0;
+    while (this.ids[first] !== id) first++;
+    index.set(id, first);
+    this.careful = true;
+    return false;
+  }
+}
+
+/**
+ * Fills the index, kind, parent and order arrays of `s`, reads each element's fields once (see
+ * readFields.ts) and pushes topology findings.
+ */
 export function buildTopology(s: DropState): void {
-  const { nodes, cables, findings } = s;
+  const { nodes, cables, findings, nodeIndex, cableIndex, nodeIds, cableIds, nodeKind, parentCable } = s;
+  const { cableFrom, cableTo } = s;
   const n = s.nodeCount;
   const m = s.cableCount;
   const supplies: number[] = [];
+  const nodeClaims = new IdClaims(nodeIndex, nodeIds);
+  const cableClaims = new IdClaims(cableIndex, cableIds);
 
   for (let i = 0; i < n; i++) {
     const el: unknown = nodes[i];
-    const id = isObject(el) ? el.id : undefined;
-    const kind = isObject(el) ? kindCode(el.kind) : undefined;
+    let id: unknown;
+    let kind: number | undefined;
+    if (typeof el === 'object' && el !== null && !Array.isArray(el)) {
+      id = (el as Loose).id;
+      kind = kindCode((el as Loose).kind);
+    }
     if (typeof id !== 'string' || id === '' || kind === undefined) {
-      s.nodeKind[i] = KIND_INVALID;
-      s.nodeIds[i] = '';
-      findings.push({
-        code: 'malformedElement',
-        severity: 'error',
-        ...(typeof id === 'string' && id !== '' ? { elementId: id } : {}),
-        message:
-          typeof id !== 'string' || id === ''
-            ? `node number ${i + 1} in the list has no id (got ${shown(id)}); give it a unique text id.`
-            : `node ${id}: kind must be supply, board, junction or load, got ${shown(isObject(el) ? el.kind : el)}.`,
-      });
+      nodeKind[i] = KIND_INVALID;
+      findings.push(malformedNode(el, i, id));
       continue;
     }
-    if (s.nodeIndex.has(id)) {
-      s.nodeKind[i] = KIND_INVALID;
-      s.nodeIds[i] = '';
+    if (!nodeClaims.claim(id, i)) {
+      nodeKind[i] = KIND_INVALID;
       findings.push({
         code: 'duplicateId',
         severity: 'error',
@@ -74,10 +121,10 @@ export function buildTopology(s: DropState): void {
       });
       continue;
     }
-    s.nodeIndex.set(id, i);
-    s.nodeIds[i] = id;
-    s.nodeKind[i] = kind;
+    nodeIds[i] = id;
+    nodeKind[i] = kind;
     if (kind === KIND_SUPPLY) supplies.push(i);
+    else readNode(s, i, el as Loose, kind);
   }
 
   s.root = supplies[0] ?? -1;
@@ -93,17 +140,18 @@ export function buildTopology(s: DropState): void {
     findings.push({
       code: 'manySupplies',
       severity: 'error',
-      elementId: s.nodeIds[i] as string,
+      elementId: nodeIds[i] as string,
       message: `${nodeLabel(s, i)}: a project has exactly one supply; remove this one or join its part of the diagram to the first supply. Nothing below it is solved.`,
     });
   }
 
-  const childCount = new Int32Array(n + 1);
+  const rows = new RowMemo(s.catalogue);
+  // childStart[from + 1] counts children first, then becomes the start of each list.
+  const start = s.childStart;
   for (let j = 0; j < m; j++) {
     const c: unknown = cables[j];
-    const id = isObject(c) ? c.id : undefined;
+    const id = typeof c === 'object' && c !== null && !Array.isArray(c) ? (c as Loose).id : undefined;
     if (typeof id !== 'string' || id === '') {
-      s.cableIds[j] = '';
       findings.push({
         code: 'malformedElement',
         severity: 'error',
@@ -111,8 +159,7 @@ export function buildTopology(s: DropState): void {
       });
       continue;
     }
-    if (s.cableIndex.has(id)) {
-      s.cableIds[j] = '';
+    if (!cableClaims.claim(id, j)) {
       findings.push({
         code: 'duplicateId',
         severity: 'error',
@@ -121,94 +168,125 @@ export function buildTopology(s: DropState): void {
       });
       continue;
     }
-    s.cableIndex.set(id, j);
-    s.cableIds[j] = id;
-    const cable = c as Record<string, unknown>;
-    const from = typeof cable.from === 'string' ? s.nodeIndex.get(cable.from) : undefined;
-    const to = typeof cable.to === 'string' ? s.nodeIndex.get(cable.to) : undefined;
-    if (from === undefined || to === undefined) {
-      const field = from === undefined ? 'from' : 'to';
-      findings.push({
-        code: 'unknownEnd',
-        severity: 'error',
-        elementId: id,
-        message: `cable ${id}: ${field} names no node (got ${shown(cable[field])}); connect it to an existing board, junction, load or the supply.`,
-      });
+    cableIds[j] = id;
+    const cable = c as Loose;
+    const fromId = cable.from;
+    const toId = cable.to;
+    const from = typeof fromId === 'string' ? nodeIndex.get(fromId) : undefined;
+    const to = typeof toId === 'string' ? nodeIndex.get(toId) : undefined;
+    const problem = cableProblem(s, id, cable, from, to);
+    if (problem) {
+      findings.push(problem);
       continue;
     }
-    if (from === to) {
-      findings.push({
-        code: 'loop',
-        severity: 'error',
-        elementId: id,
-        message: `cable ${id} starts and ends at ${nodeLabel(s, from)}; connect its far end to another node.`,
-      });
-      continue;
-    }
-    if (s.nodeKind[to] === KIND_SUPPLY) {
-      findings.push({
-        code: 'feedsSupply',
-        severity: 'error',
-        elementId: id,
-        message: `cable ${id} runs into ${nodeLabel(s, to)}; a cable's "to" end must be downstream of the supply. Swap its ends.`,
-      });
-      continue;
-    }
-    if (s.nodeKind[from] === KIND_LOAD) {
-      findings.push({
-        code: 'fromLoad',
-        severity: 'error',
-        elementId: id,
-        message: `cable ${id} starts at ${nodeLabel(s, from)}; loads are end points. Start it at a board or junction, or swap its ends.`,
-      });
-      continue;
-    }
-    if (s.parentCable[to] !== -1) {
-      const first = s.cableIds[s.parentCable[to] as number];
-      findings.push({
-        code: 'fedTwice',
-        severity: 'error',
-        elementId: id,
-        message: `cable ${id}: ${nodeLabel(s, to)} is already fed by cable ${first}; a radial distribution feeds each node once. Remove one of the two or add a junction.`,
-      });
-      continue;
-    }
-    s.parentCable[to] = j;
-    s.cableFrom[j] = from;
-    s.cableTo[j] = to;
-    childCount[from] = (childCount[from] as number) + 1;
+    parentCable[to as number] = j;
+    cableFrom[j] = from as number;
+    cableTo[j] = to as number;
+    start[(from as number) + 1] = (start[(from as number) + 1] as number) + 1;
+    readCable(s, j, cable, rows);
   }
 
   // Children as one flat list (compressed adjacency) so the walk allocates nothing per node.
-  const start = new Int32Array(n + 1);
-  for (let i = 0; i < n; i++) start[i + 1] = (start[i] as number) + (childCount[i] as number);
-  const fill = start.slice(0, n);
-  const childCables = new Int32Array(start[n] as number);
+  for (let i = 0; i < n; i++) start[i + 1] = (start[i + 1] as number) + (start[i] as number);
+  const childCables = s.childCables;
+  // `order` doubles as the fill cursor per node until the walk writes it.
+  const fill = s.order;
+  fill.set(start.subarray(0, n));
+  // Document order can stand in for breadth-first order in the passes when every cable runs
+  // forward in the list and siblings come in cable order (see DropState.walk).
+  let forward = true;
   for (let j = 0; j < m; j++) {
-    const from = s.cableFrom[j] as number;
+    const from = cableFrom[j] as number;
     if (from < 0) continue;
     const at = fill[from] as number;
     childCables[at] = j;
     fill[from] = at + 1;
+    const to = cableTo[j] as number;
+    if (
+      to < from ||
+      (at > (start[from] as number) && to < (cableTo[childCables[at - 1] as number] as number))
+    )
+      forward = false;
   }
 
+  const order = s.order;
+  const reached = s.reached;
   let len = 0;
   if (s.root >= 0) {
-    s.order[len++] = s.root;
-    s.reached[s.root] = 1;
+    order[len++] = s.root;
+    reached[s.root] = 1;
     for (let head = 0; head < len; head++) {
-      const u = s.order[head] as number;
+      const u = order[head] as number;
       const end = start[u + 1] as number;
       for (let k = start[u] as number; k < end; k++) {
-        const v = s.cableTo[childCables[k] as number] as number;
-        if (s.reached[v]) continue;
-        s.reached[v] = 1;
-        s.order[len++] = v;
+        const v = cableTo[childCables[k] as number] as number;
+        if (reached[v]) continue;
+        reached[v] = 1;
+        order[len++] = v;
       }
     }
   }
   s.orderLength = len;
-  if (len < n) classifyUnreached(s, findings);
+  const walk = s.walk;
+  s.walkIsDocumentOrder = forward;
+  if (forward) {
+    let w = 0;
+    for (let i = 0; i < n; i++) if (reached[i]) walk[w++] = i;
+  } else walk.set(order.subarray(0, len));
+  if (len < n) {
+    order.fill(0, len);
+    classifyUnreached(s, findings);
+  }
+}
+
+/** Why a cable with a valid, new id cannot join the tree, or undefined. */
+function cableProblem(
+  s: DropState,
+  id: string,
+  cable: Loose,
+  from: number | undefined,
+  to: number | undefined,
+): DropFinding | undefined {
+  if (from === undefined || to === undefined) {
+    const field = from === undefined ? 'from' : 'to';
+    return {
+      code: 'unknownEnd',
+      severity: 'error',
+      elementId: id,
+      message: `cable ${id}: ${field} names no node (got ${shown(cable[field])}); connect it to an existing board, junction, load or the supply.`,
+    };
+  }
+  if (from === to)
+    return {
+      code: 'loop',
+      severity: 'error',
+      elementId: id,
+      message: `cable ${id} starts and ends at ${nodeLabel(s, from)}; connect its far end to another node.`,
+    };
+  if (s.nodeKind[to] === KIND_SUPPLY)
+    return {
+      code: 'feedsSupply',
+      severity: 'error',
+      elementId: id,
+      message: `cable ${id} runs into ${nodeLabel(s, to)}; a cable's "to" end must be downstream of the supply. Swap its ends.`,
+    };
+  if (s.nodeKind[from] === KIND_LOAD)
+    return {
+      code: 'fromLoad',
+      severity: 'error',
+      elementId: id,
+      message: `cable ${id} starts at ${nodeLabel(s, from)}; loads are end points. Start it at a board or junction, or swap its ends.`,
+    };
+  if (s.parentCable[to] !== -1) {
+    const first = s.cableIds[s.parentCable[to] as number];
+    return {
+      code: 'fedTwice',
+      severity: 'error',
+      elementId: id,
+      message: `cable ${id}: ${nodeLabel(s, to)} is already fed by cable ${first}; a radial distribution feeds each node once. Remove one of the two or add a junction.`,
+    };
+  }
+  return undefined;
 }
 
 /** Names each island root and each loop once; nodes hanging below them need no finding of their own. */

@@ -1,14 +1,16 @@
 /**
  * Field checks the solver needs on each reached element: lengths, conductor rows, parallel
- * counts, load demand, board diversity. A bad cable marks its segment unsolvable (the loads below
- * are then not judged); a bad load is left out of the demand (and said so); a bad diversity
- * falls back to 1.
+ * counts, load demand, board diversity. The fast read (readFields.ts) accepted the well-formed
+ * ones; here the flagged ones get their findings. A bad cable marks its segment unsolvable (the
+ * loads below are then not judged); a bad load is left out of the demand (and said so); a bad
+ * diversity falls back to 1.
  */
-import { findConductor, sizesFor } from '../catalogue/conductorLookup.ts';
+import { sizesFor } from '../catalogue/conductorLookup.ts';
 import type { DropState } from './dropState.ts';
-import { KIND_BOARD, KIND_LOAD, PHASE_ANGLE } from './dropState.ts';
+import { KIND_BOARD, PHASE_ANGLE } from './dropState.ts';
 import { shown } from './findings.ts';
 import { nodeLabel } from './topology.ts';
+import { UNIT_A, UNIT_KVA, UNIT_KW } from './readFields.ts';
 
 type Loose = Record<string, unknown>;
 
@@ -16,38 +18,33 @@ function positive(v: unknown): v is number {
   return typeof v === 'number' && Number.isFinite(v) && v > 0;
 }
 
+/**
+ * The careful check of every reached cable the fast read flagged, in document order: names each
+ * bad field and marks the segment unsolvable. Cables the supply does not reach keep no figures.
+ */
 export function validateCables(s: DropState): void {
-  const { findings } = s;
+  const { findings, cableTo, reached, cableCheck } = s;
   for (let j = 0; j < s.cableCount; j++) {
-    const to = s.cableTo[j] as number;
-    if (to < 0 || !s.reached[to]) continue;
+    const to = cableTo[j] as number;
+    if (to < 0 || !reached[to] || !cableCheck[j]) continue;
     const c = s.cables[j] as unknown as Loose;
     const id = s.cableIds[j] as string;
-    let bad = false;
-    if (!positive(c.lengthM)) {
-      bad = true;
+    if (!positive(c.lengthM))
       findings.push({
         code: 'badLength',
         severity: 'error',
         elementId: id,
         message: `cable ${id}: length must be a positive number of metres, got ${shown(c.lengthM)}. Loads below it are not judged until it is set.`,
       });
-    } else {
-      s.cableLengthM[j] = c.lengthM;
-    }
     const parallel = c.parallel;
-    if (!(typeof parallel === 'number' && Number.isInteger(parallel) && parallel >= 1 && parallel <= 100)) {
-      bad = true;
+    if (!(typeof parallel === 'number' && Number.isInteger(parallel) && parallel >= 1 && parallel <= 100))
       findings.push({
         code: 'badParallel',
         severity: 'error',
         elementId: id,
         message: `cable ${id}: parallel must be a whole number of cables from 1 to 100, got ${shown(parallel)}.`,
       });
-    }
-    const row = findConductor(s.catalogue, c.material, c.insulation, c.construction, c.sizeMm2);
-    if (!row) {
-      bad = true;
+    if (!s.cableRow[j]) {
       const sizes = sizesFor(s.catalogue, c.material, c.insulation, c.construction);
       findings.push(
         sizes.length > 0
@@ -65,15 +62,22 @@ export function validateCables(s: DropState): void {
             },
       );
     }
-    s.cableRow[j] = row;
-    if (bad || !row) {
-      s.cableBad[j] = 1;
-      continue;
-    }
-    const scaleX = row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1;
-    const p = parallel as number;
-    s.cableZr[j] = (row.rOhmPerM * s.cableLengthM[j]!) / p;
-    s.cableZx[j] = (row.xOhmPerM * scaleX * s.cableLengthM[j]!) / p;
+    s.cableBad[j] = 1;
+  }
+  if (s.orderLength < s.nodeCount) forgetUnreached(s);
+}
+
+/** Undoes the fast read for elements outside the fed tree, which carry no figures. */
+function forgetUnreached(s: DropState): void {
+  const { reached, cableTo } = s;
+  for (let i = 0; i < s.nodeCount; i++) if (!reached[i]) s.diversity[i] = 1;
+  for (let j = 0; j < s.cableCount; j++) {
+    const to = cableTo[j] as number;
+    if (to < 0 || reached[to]) continue;
+    s.cableLengthM[j] = 0;
+    s.cableZr[j] = 0;
+    s.cableZx[j] = 0;
+    s.cableRow[j] = undefined;
   }
 }
 
@@ -84,68 +88,70 @@ const UNIT_OK: Record<string, true> = Object.assign(Object.create(null) as Recor
   A: true,
 });
 
+/**
+ * The careful check of every reached node the fast read flagged, in breadth-first order: a bad
+ * diversity falls back to 1, a bad load is left out of the demand; each with its finding.
+ */
 export function validateNodes(s: DropState): void {
-  const { findings } = s;
-  const sqrt3 = Math.sqrt(3);
-  const singleSupply = s.root >= 0 && (s.nodes[s.root] as unknown as Loose).phases === 1;
+  const { findings, order, nodeCheck } = s;
   for (let k = 0; k < s.orderLength; k++) {
-    const i = s.order[k] as number;
-    const kind = s.nodeKind[i];
+    const i = order[k] as number;
+    if (!nodeCheck[i]) continue;
     const el = s.nodes[i] as unknown as Loose;
     const id = s.nodeIds[i] as string;
-    if (kind === KIND_BOARD) {
-      const d = el.diversity;
-      if (typeof d === 'number' && d > 0 && d <= 1) s.diversity[i] = d;
-      else
-        findings.push({
-          code: 'badDiversity',
-          severity: 'error',
-          elementId: id,
-          message: `${nodeLabel(s, i)}: diversity must be a number above 0 and at most 1, got ${shown(d)}; 1 (no diversity) is used until it is fixed.`,
-        });
-      continue;
-    }
-    if (kind !== KIND_LOAD) continue;
-    const declared = el.phases === 3 ? 7 : el.phase === 'L2' ? 2 : el.phase === 'L3' ? 4 : 1;
-    s.loadMask[i] = singleSupply && declared !== 7 ? 1 : declared;
-    const demand = el.demand as Loose | undefined;
-    const value = typeof demand === 'object' && demand !== null ? demand.value : undefined;
-    const unit = typeof demand === 'object' && demand !== null ? demand.unit : undefined;
-    const pf = el.powerFactor;
-    const df = el.demandFactor;
-    const phases = el.phases;
-    const problem = loadProblem(value, unit, pf, df, phases, el.phase);
-    if (problem) {
+    if (s.nodeKind[i] === KIND_BOARD) {
       findings.push({
-        code: problem[0],
+        code: 'badDiversity',
         severity: 'error',
         elementId: id,
-        message: `${nodeLabel(s, i)}: ${problem[1]}. Its demand is left out of every cable upstream until it is fixed.`,
+        message: `${nodeLabel(s, i)}: diversity must be a number above 0 and at most 1, got ${shown(el.diversity)}; 1 (no diversity) is used until it is fixed.`,
       });
       continue;
     }
-    const v = value as number;
-    const cosPhi = pf as number;
-    const volts = phases === 1 ? s.u0V : sqrt3 * s.uLlV;
-    let amps: number;
-    if (unit === 'A') amps = v;
-    else if (unit === 'kVA') amps = (v * 1000) / volts;
-    else amps = ((unit === 'kW' ? v * 1000 : v) as number) / (volts * cosPhi);
-    const current = amps * (df as number);
-    const phi = Math.acos(cosPhi);
-    s.loadCurrentA[i] = current;
-    s.loadPhiRad[i] = phi;
-    s.loadValid[i] = 1;
-    // The load's own current phasors, lagging each phase voltage by φ.
-    const mask = s.loadMask[i] as number;
-    for (let p = 0; p < 3; p++) {
-      if (!(mask & (1 << p))) continue;
-      const a = (PHASE_ANGLE[p] as number) - phi;
-      s.iRe[i * 3 + p] = current * Math.cos(a);
-      s.iIm[i * 3 + p] = current * Math.sin(a);
-    }
+    const demand = el.demand as Loose | undefined;
+    const value = typeof demand === 'object' && demand !== null ? demand.value : undefined;
+    const unit = typeof demand === 'object' && demand !== null ? demand.unit : undefined;
+    const problem = loadProblem(value, unit, el.powerFactor, el.demandFactor, el.phases, el.phase) ?? [
+      'badDemand',
+      'demand fields could not be read',
+    ];
+    findings.push({
+      code: problem[0],
+      severity: 'error',
+      elementId: id,
+      message: `${nodeLabel(s, i)}: ${problem[1]}. Its demand is left out of every cable upstream until it is fixed.`,
+    });
   }
 }
+
+/**
+ * A reached load's current and its phasors, lagging each phase voltage by φ, from the fields the
+ * fast read stored. `mask` is the phases it draws from.
+ */
+export function setLoadCurrent(s: DropState, i: number, mask: number): void {
+  const v = s.loadValue[i] as number;
+  const cosPhi = s.loadPf[i] as number;
+  const unit = s.loadUnit[i];
+  const volts = s.loadDeclared[i] === 7 ? SQRT3 * s.uLlV : s.u0V;
+  let amps: number;
+  if (unit === UNIT_A) amps = v;
+  else if (unit === UNIT_KVA) amps = (v * 1000) / volts;
+  else amps = (unit === UNIT_KW ? v * 1000 : v) / (volts * cosPhi);
+  const current = amps * (s.loadDf[i] as number);
+  const phi = Math.acos(cosPhi);
+  s.loadCurrentA[i] = current;
+  s.loadPhiRad[i] = phi;
+  s.loadValid[i] = 1;
+  const b = i * 3;
+  for (let p = 0; p < 3; p++) {
+    if (!(mask & (1 << p))) continue;
+    const a = (PHASE_ANGLE[p] as number) - phi;
+    s.iRe[b + p] = current * Math.cos(a);
+    s.iIm[b + p] = current * Math.sin(a);
+  }
+}
+
+const SQRT3 = Math.sqrt(3);
 
 type LoadProblem = ['badDemand' | 'badPowerFactor' | 'badDemandFactor' | 'badPhases', string];
 

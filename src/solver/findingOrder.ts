@@ -1,0 +1,51 @@
+/**
+ * Keeps findings in the order they have always come in when a pass walks the tree in document
+ * order (DropState.walk) instead of breadth-first order: the pass tags what it pushed with the
+ * node it was working on, and `settle` sorts that tail by the node's breadth-first position,
+ * keeping each node's own findings in the order pushed.
+ */
+import type { DropState } from './dropState.ts';
+import type { DropFinding } from './findings.ts';
+
+export class FindingTail {
+  private readonly start: number;
+  private readonly nodes: number[] = [];
+  private seen: number;
+
+  constructor(private readonly findings: DropFinding[]) {
+    this.start = findings.length;
+    this.seen = findings.length;
+  }
+
+  /** Marks the findings pushed since the last call as belonging to node `v`. */
+  tag(v: number): void {
+    if (this.findings.length === this.seen) return;
+    for (let k = this.seen; k < this.findings.length; k++) this.nodes.push(v);
+    this.seen = this.findings.length;
+  }
+
+  /** Sorts the tail by breadth-first position of its nodes, leaves first when `leavesFirst`. */
+  settle(s: DropState, leavesFirst: boolean): void {
+    const count = this.nodes.length;
+    if (count < 2 || !s.walkIsDocumentOrder) return;
+    const rank = breadthFirstRank(s);
+    const keys = this.nodes.map((v) => rank[v] as number);
+    const idx = Array.from({ length: count }, (_, k) => k);
+    idx.sort(
+      (a, b) =>
+        (leavesFirst
+          ? (keys[b] as number) - (keys[a] as number)
+          : (keys[a] as number) - (keys[b] as number)) || a - b,
+    );
+    const tail = this.findings.slice(this.start, this.start + count);
+    for (let k = 0; k < count; k++) this.findings[this.start + k] = tail[idx[k] as number] as DropFinding;
+  }
+}
+
+function breadthFirstRank(s: DropState): Int32Array {
+  if (!s.rankReady) {
+    for (let k = 0; k < s.orderLength; k++) s.rank[s.order[k] as number] = k;
+    s.rankReady = true;
+  }
+  return s.rank;
+}

@@ -1,0 +1,126 @@
+/**
+ * The fast read of each element's fields, done once in document order while the topology is
+ * built, so later passes work on typed arrays only. Well-formed values are stored; anything else
+ * only raises a flag (`nodeCheck`, `cableCheck`) and the careful checks in validateElements.ts,
+ * which run on reached elements in the solver's usual order, write the finding.
+ */
+import type { CatalogueSet, ConductorRow } from '../catalogue/catalogueSet.ts';
+import { findConductor } from '../catalogue/conductorLookup.ts';
+import type { DropState } from './dropState.ts';
+import { KIND_BOARD, KIND_LOAD } from './dropState.ts';
+
+type Loose = Record<string, unknown>;
+
+export const UNIT_W = 0;
+export const UNIT_KW = 1;
+export const UNIT_KVA = 2;
+export const UNIT_A = 3;
+const UNIT_BAD = 255;
+
+function unitCode(unit: unknown): number {
+  switch (unit) {
+    case 'kW':
+      return UNIT_KW;
+    case 'W':
+      return UNIT_W;
+    case 'kVA':
+      return UNIT_KVA;
+    case 'A':
+      return UNIT_A;
+    default:
+      return UNIT_BAD;
+  }
+}
+
+/**
+ * findConductor remembered per cable type and size for one solve: a network uses a few dozen
+ * types, so most cables cost four map hits instead of building a text key.
+ */
+export class RowMemo {
+  private readonly byMaterial = new Map<string, Map<string, Map<string, Map<number, ConductorRow | null>>>>();
+  constructor(private readonly set: CatalogueSet) {}
+
+  find(
+    material: unknown,
+    insulation: unknown,
+    construction: unknown,
+    sizeMm2: unknown,
+  ): ConductorRow | undefined {
+    if (
+      typeof material !== 'string' ||
+      typeof insulation !== 'string' ||
+      typeof construction !== 'string' ||
+      typeof sizeMm2 !== 'number'
+    )
+      return findConductor(this.set, material, insulation, construction, sizeMm2);
+    let a = this.byMaterial.get(material);
+    if (!a) this.byMaterial.set(material, (a = new Map()));
+    let b = a.get(insulation);
+    if (!b) a.set(insulation, (b = new Map()));
+    let c = b.get(construction);
+    if (!c) b.set(construction, (c = new Map()));
+    let row = c.get(sizeMm2);
+    if (row === undefined) {
+      row = findConductor(this.set, material, insulation, construction, sizeMm2) ?? null;
+      c.set(sizeMm2, row);
+    }
+    return row ?? undefined;
+  }
+}
+
+/** Stores a board's diversity or a load's demand fields; flags the node when one is not well formed. */
+export function readNode(s: DropState, i: number, el: Loose, kind: number): void {
+  if (kind === KIND_BOARD) {
+    const d = el.diversity;
+    if (typeof d === 'number' && d > 0 && d <= 1) s.diversity[i] = d;
+    else s.nodeCheck[i] = 1;
+    return;
+  }
+  if (kind !== KIND_LOAD) return;
+  const phases = el.phases;
+  const phase = el.phase;
+  s.loadDeclared[i] = phases === 3 ? 7 : phase === 'L2' ? 2 : phase === 'L3' ? 4 : 1;
+  const category = el.category;
+  s.loadCategory[i] = category === 'other' ? 1 : category === 'lighting' ? 0 : 2;
+  const demand = el.demand;
+  const value = typeof demand === 'object' && demand !== null ? (demand as Loose).value : undefined;
+  const unit = typeof demand === 'object' && demand !== null ? unitCode((demand as Loose).unit) : UNIT_BAD;
+  const pf = el.powerFactor;
+  const df = el.demandFactor;
+  if (
+    typeof value === 'number' &&
+    Number.isFinite(value) &&
+    value >= 0 &&
+    unit !== UNIT_BAD &&
+    typeof pf === 'number' &&
+    pf > 0 &&
+    pf <= 1 &&
+    typeof df === 'number' &&
+    df >= 0 &&
+    df <= 1 &&
+    (phases === 3 || (phases === 1 && (phase === 'L1' || phase === 'L2' || phase === 'L3')))
+  ) {
+    s.loadValue[i] = value;
+    s.loadUnit[i] = unit;
+    s.loadPf[i] = pf;
+    s.loadDf[i] = df;
+  } else s.nodeCheck[i] = 1;
+}
+
+/** Stores a tree cable's length, conductor row, impedance and phases; flags it when a field is not well formed. */
+export function readCable(s: DropState, j: number, c: Loose, rows: RowMemo): void {
+  const phases = c.phases;
+  s.cablePhasesField[j] = phases === 3 ? 3 : phases === 1 ? 1 : 0;
+  const lengthM = c.lengthM;
+  const okLength = typeof lengthM === 'number' && Number.isFinite(lengthM) && lengthM > 0;
+  if (okLength) s.cableLengthM[j] = lengthM;
+  const p = c.parallel;
+  const okParallel = typeof p === 'number' && Number.isInteger(p) && p >= 1 && p <= 100;
+  const row = rows.find(c.material, c.insulation, c.construction, c.sizeMm2);
+  s.cableRow[j] = row;
+  if (okLength && okParallel && row) {
+    const scaleX = row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1;
+    s.cableZr[j] = (row.rOhmPerM * lengthM) / p;
+    s.cableZx[j] = (row.xOhmPerM * scaleX * lengthM) / p;
+  } else s.cableCheck[j] = 1;
+}
