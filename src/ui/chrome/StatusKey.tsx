@@ -26,6 +26,12 @@ export function StatusKey() {
           </span>
         );
       })}
+      <span
+        className="ed-key-note"
+        title="A cable or board is shown with the worst status of the loads it feeds, so an over-limit load far down marks its whole path."
+      >
+        cables and boards: worst load fed
+      </span>
     </div>
   );
 }

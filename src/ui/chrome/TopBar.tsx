@@ -56,7 +56,7 @@ export function TopBar() {
         </svg>
         <span>Dropline</span>
       </div>
-      <div className="ed-doc-title" title={fileName ?? 'not saved to a file yet'}>
+      <div className="ed-doc-title" title={`${title}\n${fileName ?? 'not saved to a file yet'}`}>
         <strong data-testid="project-title">{title}</strong>
         <span>{fileName ?? 'unsaved file · kept in this browser'}</span>
       </div>

@@ -33,6 +33,7 @@ function SettingsForm() {
       title="Settings"
       testId="settings-dialog"
       onClose={close}
+      wide
       footer={
         <>
           {error && <span className="dl-reason">{error}</span>}

@@ -30,6 +30,21 @@ export function VoltageProfile({ profile }: { profile: Profile }) {
   const xTicks = [0, 0.5, 1].map((f) => f * maxX);
   const over = last.dropPct > limit.value;
   const lineColour = over ? STATUS_LOOK.over.colour : '#2c5f7c';
+  // A point's number is drawn only where it clears the previous drawn one (meter tails a few metres
+  // from the supply would print "12" on one spot); every point keeps its tooltip and table row.
+  const numbered = new Set<number>();
+  let lastDrawn: { x: number; y: number } | null = null;
+  points.forEach((p, i) => {
+    const here = { x: x(p.distanceM), y: y(p.dropPct) };
+    if (
+      !lastDrawn ||
+      Math.hypot(here.x - lastDrawn.x, here.y - lastDrawn.y) >= 14 ||
+      i === points.length - 1
+    ) {
+      numbered.add(i);
+      lastDrawn = here;
+    }
+  });
   const path = points
     .map((p, i) => `${i === 0 ? 'M' : 'L'}${x(p.distanceM).toFixed(1)},${y(p.dropPct).toFixed(1)}`)
     .join(' ');
@@ -53,8 +68,14 @@ export function VoltageProfile({ profile }: { profile: Profile }) {
             </text>
           </g>
         ))}
-        {xTicks.map((t) => (
-          <text key={`x${t}`} x={x(t)} y={H - M.bottom + 12} textAnchor="middle">
+        {xTicks.map((t, i) => (
+          <text
+            key={`x${t}`}
+            x={x(t)}
+            y={H - M.bottom + 12}
+            // The end ticks keep inside the chart, so "100 m" is not cut off at the edge.
+            textAnchor={i === 0 ? 'start' : i === xTicks.length - 1 ? 'end' : 'middle'}
+          >
             {fmt(t, 0)} m
           </text>
         ))}
@@ -92,14 +113,16 @@ export function VoltageProfile({ profile }: { profile: Profile }) {
               stroke={lineColour}
               strokeWidth={1.6}
             />
-            <text
-              x={x(p.distanceM) + (i === points.length - 1 ? -5 : 5)}
-              y={y(p.dropPct) - 5}
-              textAnchor={i === points.length - 1 ? 'end' : 'start'}
-              style={{ fill: '#1e2931', fontWeight: 600 }}
-            >
-              {i + 1}
-            </text>
+            {numbered.has(i) && (
+              <text
+                x={x(p.distanceM) + (i === points.length - 1 ? -5 : 5)}
+                y={y(p.dropPct) - 5}
+                textAnchor={i === points.length - 1 ? 'end' : 'start'}
+                style={{ fill: '#1e2931', fontWeight: 600 }}
+              >
+                {i + 1}
+              </text>
+            )}
             <title>{`${i + 1}. ${p.name}`}</title>
           </g>
         ))}

@@ -90,7 +90,7 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
     col('from', 'From', 'Sending end (towards the supply)', false),
     col('to', 'To', 'Receiving end', false),
     col('length', 'Length m', 'Route length, one way, metres'),
-    col('size', 'Size mm²', 'Line conductor / cpc cross-section, mm²'),
+    col('size', 'Size mm²', 'Line conductor / cpc cross-section, mm² (arm.: the armour is the cpc)'),
     col('phases', 'Ph', 'Phases carried'),
     col('device', 'Device', 'Protective device at the sending end', false),
     col('ib', 'Ib A', 'Design current Ib, worst phase, amperes'),
@@ -126,7 +126,9 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
         length: num(c.lengthM, 1),
         size: {
           sort: c.sizeMm2,
-          text: `${c.parallel > 1 ? `${c.parallel}× ` : ''}${c.sizeMm2} / ${c.cpc.sizeMm2}`,
+          // An SWA cable's "cpc" is its armour, whose cross-section is much larger than the cores':
+          // say so, or "4 / 35" reads as a 35 mm² protective conductor.
+          text: `${c.parallel > 1 ? `${c.parallel}× ` : ''}${c.sizeMm2} / ${c.cpc.sizeMm2}${c.cpc.kind === 'armour' ? ' arm.' : ''}`,
         },
         phases: num(c.phases, 0),
         device: txt(

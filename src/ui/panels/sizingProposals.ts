@@ -44,7 +44,8 @@ export function sizingRows(doc: ProjectDocument, changes: SizeChange[]): Proposa
       key: `${cableId}.size`,
       elementId: cableId,
       elementName: cable.name || cableId,
-      field: 'Size (line / cpc)',
+      // An armoured cable's cpc is its armour: name it, so "4 / 35" is not read as a 35 mm² cpc.
+      field: cable.cpc.kind === 'armour' ? 'Size (line / armour)' : 'Size (line / cpc)',
       from: `${cable.sizeMm2} / ${cable.cpc.sizeMm2} mm²`,
       to: `${toLine} / ${toCpc} mm²`,
       reason: (line ?? cpc)!.reason,
