@@ -7,6 +7,7 @@ import type { Cable, Load, NodeElement, ProjectDocument } from '../model/types.t
 import type { CatalogueSet, ConductorRow } from '../catalogue/catalogueSet.ts';
 import type { LimitProfile } from '../catalogue/limits.ts';
 import type { DropFinding } from './findings.ts';
+import type { IdIndex } from './idIndex.ts';
 
 export const KIND_SUPPLY = 0;
 export const KIND_BOARD = 1;
@@ -37,8 +38,9 @@ export interface DropState {
   cables: Cable[];
   nodeCount: number;
   cableCount: number;
-  nodeIndex: Map<string, number>;
-  cableIndex: Map<string, number>;
+  /** Id → position; reads like a ReadonlyMap (`get`, `has`, iteration). */
+  nodeIndex: IdIndex;
+  cableIndex: IdIndex;
   nodeKind: Uint8Array;
   /** Valid ids (or '' where the element is malformed). */
   nodeIds: string[];

@@ -29,6 +29,7 @@ import { accumulate, sumDemand } from './flow.ts';
 import { judgeLoads } from './judge.ts';
 import { CableResultView, LoadResultView, NodeResultView } from './resultObjects.ts';
 import { lazyRecord } from './lazyRecord.ts';
+import { IdIndex } from './idIndex.ts';
 
 type Loose = Record<string, unknown>;
 
@@ -82,6 +83,8 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
   const read = readSettings(doc, findings);
   const n = nodes.length;
   const m = cables.length;
+  const nodeIds = new Array<string>(n).fill('');
+  const cableIds = new Array<string>(m).fill('');
   return {
     doc: doc as ProjectDocument,
     catalogue,
@@ -98,10 +101,10 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
     cables,
     nodeCount: n,
     cableCount: m,
-    nodeIndex: new Map(),
-    cableIndex: new Map(),
-    nodeIds: new Array<string>(n).fill(''),
-    cableIds: new Array<string>(m).fill(''),
+    nodeIndex: new IdIndex(nodeIds, n),
+    cableIndex: new IdIndex(cableIds, m),
+    nodeIds,
+    cableIds,
     cableRow: new Array<ConductorRow | undefined>(m).fill(undefined),
     orderLength: 0,
     root: -1,

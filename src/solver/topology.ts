@@ -55,48 +55,15 @@ function malformedNode(el: unknown, i: number, id: unknown): DropFinding {
 }
 
 /**
- * Adds `id -> i` to `index` unless the id is already there (the first holder keeps it). One map
- * operation per new id: the set is tried and the size tells whether the id was new. On the first
- * repeat the first holder is found by a scan and put back, and from then on each claim asks the
- * map first, so a file full of repeats still costs linear time.
- */
-class IdClaims {
-  private careful = false;
-  constructor(
-    private readonly index: Map<string, number>,
-    private readonly ids: readonly string[],
-  ) {}
-
-  claim(id: string, i: number): boolean {
-    const index = this.index;
-    if (this.careful) {
-      if (index.has(id)) return false;
-      index.set(id, i);
-      return true;
-    }
-    const before = index.size;
-    index.set(id, i);
-    if (index.size !== before) return true;
-    let first = 0;
-    while (this.ids[first] !== id) first++;
-    index.set(id, first);
-    this.careful = true;
-    return false;
-  }
-}
-
-/**
  * Fills the index, kind, parent and order arrays of `s`, reads each element's fields once (see
  * readFields.ts) and pushes topology findings.
  */
 export function buildTopology(s: DropState): void {
-  const { nodes, cables, findings, nodeIndex, cableIndex, nodeIds, cableIds, nodeKind, parentCable } = s;
+  const { nodes, cables, findings, nodeIndex, cableIndex, nodeIds, nodeKind, parentCable } = s;
   const { cableFrom, cableTo } = s;
   const n = s.nodeCount;
   const m = s.cableCount;
   const supplies: number[] = [];
-  const nodeClaims = new IdClaims(nodeIndex, nodeIds);
-  const cableClaims = new IdClaims(cableIndex, cableIds);
 
   for (let i = 0; i < n; i++) {
     const el: unknown = nodes[i];
@@ -111,7 +78,7 @@ export function buildTopology(s: DropState): void {
       findings.push(malformedNode(el, i, id));
       continue;
     }
-    if (!nodeClaims.claim(id, i)) {
+    if (nodeIndex.claim(id, i) !== i) {
       nodeKind[i] = KIND_INVALID;
       findings.push({
         code: 'duplicateId',
@@ -121,7 +88,6 @@ export function buildTopology(s: DropState): void {
       });
       continue;
     }
-    nodeIds[i] = id;
     nodeKind[i] = kind;
     if (kind === KIND_SUPPLY) supplies.push(i);
     else readNode(s, i, el as Loose, kind);
@@ -159,7 +125,7 @@ export function buildTopology(s: DropState): void {
       });
       continue;
     }
-    if (!cableClaims.claim(id, j)) {
+    if (cableIndex.claim(id, j) !== j) {
       findings.push({
         code: 'duplicateId',
         severity: 'error',
@@ -168,12 +134,11 @@ export function buildTopology(s: DropState): void {
       });
       continue;
     }
-    cableIds[j] = id;
     const cable = c as Loose;
     const fromId = cable.from;
     const toId = cable.to;
-    const from = typeof fromId === 'string' ? nodeIndex.get(fromId) : undefined;
-    const to = typeof toId === 'string' ? nodeIndex.get(toId) : undefined;
+    const from = nodeIndex.get(fromId);
+    const to = nodeIndex.get(toId);
     const problem = cableProblem(s, id, cable, from, to);
     if (problem) {
       findings.push(problem);
