@@ -55,7 +55,7 @@ export function nodeLabel(r: NodeResult | undefined, mode: LabelMode): string {
   switch (mode) {
     case 'drop':
     case 'capacity':
-      return r.status === null ? 'Σ –' : `Σ ${fmt(r.cumulativePct.value, 2)} %`;
+      return r.status === null ? 'not solved' : `Σ ${fmt(r.cumulativePct.value, 2)} %`;
     case 'current': {
       const worst = Math.max(r.currentsA.L1, r.currentsA.L2, r.currentsA.L3);
       return `${fmtAmps(worst)} A`;
