@@ -55,7 +55,6 @@ export function attachProtection(doc: ProjectDocument, results: Results, catalog
   const t = treeInputs(doc, results);
   const u0V = supply.u0V;
   const pass = protectionPass({ t, results, supply, u0V, source, fuses, tables }, findings);
-  if (t.root >= 0) pass.a.hasNode[t.root] = 1;
   const records = protectedRecords(
     { t, a: pass.a, supply, u0V, source, fuses, tables, motors: pass.motors },
     results,

@@ -4,7 +4,7 @@
  * Resistances come from IEC 60228 maxima at 20 °C corrected to temperature; R and X are kept apart
  * and summed as complex impedances so a transformer source or a large cable keeps its angle.
  */
-import type { Cable, Cpc, Insulation, Settings, Supply } from '../../model/types.ts';
+import type { Cable, Cpc, Insulation, Material, Settings, Supply } from '../../model/types.ts';
 import { atTemperature, resistance20OhmPerM } from '../../catalogue/iec60228.ts';
 import type { Impedance } from './protectionResults.ts';
 
@@ -18,11 +18,31 @@ export const STEEL_RHO20_OHM_MM2_PER_M = 0.138;
 /** Temperature coefficient of steel at 20 °C from β = 202 °C: 1/(202 + 20) (from memory). */
 export const STEEL_ALPHA20_PER_K = 1 / 222;
 
+const R20_BY_SIZE: Readonly<Record<string, Map<number, number | undefined>>> = {
+  Cu: new Map(),
+  Al: new Map(),
+};
+
+/**
+ * IEC 60228 resistance at 20 °C per metre (resistance20OhmPerM), remembered per material and size:
+ * the table is keyed by the size's text, which costs a number-to-text conversion on every look-up.
+ * @example lineResistance20OhmPerM('Cu', 2.5) // 0.00741
+ */
+export function lineResistance20OhmPerM(material: Material, sizeMm2: number): number | undefined {
+  const bySize = material === 'Cu' || material === 'Al' ? R20_BY_SIZE[material] : undefined;
+  if (!bySize) return resistance20OhmPerM(material, sizeMm2);
+  const r = bySize.get(sizeMm2);
+  if (r !== undefined || bySize.has(sizeMm2)) return r;
+  const found = resistance20OhmPerM(material, sizeMm2);
+  bySize.set(sizeMm2, found);
+  return found;
+}
+
 /** Resistance of the protective conductor per metre at 20 °C, or undefined for a size IEC 60228 lacks. */
 export function cpcResistance20OhmPerM(cpc: Cpc): number | undefined {
   if (!(cpc.sizeMm2 > 0)) return undefined;
   if (cpc.material === 'steel') return STEEL_RHO20_OHM_MM2_PER_M / cpc.sizeMm2;
-  return resistance20OhmPerM(cpc.material, cpc.sizeMm2);
+  return lineResistance20OhmPerM(cpc.material, cpc.sizeMm2);
 }
 
 export function cpcAtTemperature(r20: number, cpc: Cpc, tempC: number): number {
@@ -46,7 +66,7 @@ export interface SegmentLoop {
  * @example segmentLoop(cableOf2_5With1_5CpcAt30m)?.r1r2ColdOhm // 30 × 0.01951 = 0.5853
  */
 export function segmentLoop(cable: Cable): SegmentLoop | undefined {
-  const r1 = resistance20OhmPerM(cable.material, cable.sizeMm2);
+  const r1 = lineResistance20OhmPerM(cable.material, cable.sizeMm2);
   const r2 = cpcResistance20OhmPerM(cable.cpc);
   if (r1 === undefined || r2 === undefined) return undefined;
   const t = operatingTempC(cable.insulation);

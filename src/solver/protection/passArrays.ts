@@ -14,8 +14,8 @@ export class PassArrays {
   /** Zs hot and cold, the line-neutral fault loop and the per-phase fault impedance, ohms. */
   readonly zhR: Float64Array;
   readonly zhX: Float64Array;
+  /** The cold loop's resistance (its reactance is the hot loop's, zhX). */
   readonly zcR: Float64Array;
-  readonly zcX: Float64Array;
   readonly flR: Float64Array;
   readonly flX: Float64Array;
   readonly fpR: Float64Array;
@@ -25,8 +25,20 @@ export class PassArrays {
   readonly zsMax: Float64Array;
   readonly zsMaxKnown: Uint8Array;
 
-  /** 1 where the cable gets a protection result. */
+  /** 1 where the cable gets a protection result, 2 where it is reached but has no resistance data. */
   readonly hasCable: Uint8Array;
+  /** Per cable, read in document order: own device, resistances known, three-phase. */
+  readonly ownDevice: Uint8Array;
+  readonly noResistance: Uint8Array;
+  readonly cableThree: Uint8Array;
+  /** Position of the cable in the walk from the origin (orders the findings). */
+  readonly rank: Int32Array;
+  readonly r1Cold: Float64Array;
+  /** Reactance of the segment, one conductor, parallel cables combined, ohms. */
+  readonly xLen: Float64Array;
+  readonly cpcMm2: Float64Array;
+  readonly cpcK: Float64Array;
+  readonly byTable: Uint8Array;
   /** The cable whose device protects this one, -1 where none. */
   readonly protBy: Int32Array;
   /** 1 distribution circuit, 0 final circuit. */
@@ -42,31 +54,60 @@ export class PassArrays {
   readonly ci: Float64Array;
 
   constructor(n: number, m: number) {
-    this.acc = new Uint8Array(n);
-    this.hasNode = new Uint8Array(n);
-    this.zhR = new Float64Array(n);
-    this.zhX = new Float64Array(n);
-    this.zcR = new Float64Array(n);
-    this.zcX = new Float64Array(n);
-    this.flR = new Float64Array(n);
-    this.flX = new Float64Array(n);
-    this.fpR = new Float64Array(n);
-    this.fpX = new Float64Array(n);
-    this.three = new Uint8Array(n);
-    this.zsMax = new Float64Array(n);
-    this.zsMaxKnown = new Uint8Array(n);
-    this.hasCable = new Uint8Array(m);
-    this.protBy = new Int32Array(m).fill(-1);
-    this.circuit = new Uint8Array(m);
-    this.requiredS = new Float64Array(m);
-    this.r1r2Hot = new Float64Array(m);
-    this.r1r2Cold = new Float64Array(m);
-    this.capOk = new Uint8Array(m);
-    this.itA = new Float64Array(m);
-    this.izA = new Float64Array(m);
-    this.ca = new Float64Array(m);
-    this.cg = new Float64Array(m);
-    this.ci = new Float64Array(m);
+    // One buffer for every array: one allocation per solve, not twenty-five.
+    const f64 = 8 * n + 12 * m;
+    const i32 = 2 * m;
+    const u8 = 4 * n + 7 * m;
+    const buffer = new ArrayBuffer(f64 * 8 + i32 * 4 + u8);
+    let at = 0;
+    const f = (len: number) => {
+      const out = new Float64Array(buffer, at, len);
+      at += len * 8;
+      return out;
+    };
+    const i = (len: number) => {
+      const out = new Int32Array(buffer, at, len);
+      at += len * 4;
+      return out;
+    };
+    const u = (len: number) => {
+      const out = new Uint8Array(buffer, at, len);
+      at += len;
+      return out;
+    };
+    this.zhR = f(n);
+    this.zhX = f(n);
+    this.zcR = f(n);
+    this.flR = f(n);
+    this.flX = f(n);
+    this.fpR = f(n);
+    this.fpX = f(n);
+    this.zsMax = f(n);
+    this.requiredS = f(m);
+    this.r1r2Hot = f(m);
+    this.r1r2Cold = f(m);
+    this.itA = f(m);
+    this.izA = f(m);
+    this.ca = f(m);
+    this.cg = f(m);
+    this.ci = f(m);
+    this.r1Cold = f(m);
+    this.xLen = f(m);
+    this.cpcMm2 = f(m);
+    this.cpcK = f(m);
+    this.protBy = i(m).fill(-1);
+    this.rank = i(m);
+    this.acc = u(n);
+    this.hasNode = u(n);
+    this.three = u(n);
+    this.zsMaxKnown = u(n);
+    this.hasCable = u(m);
+    this.circuit = u(m);
+    this.capOk = u(m);
+    this.ownDevice = u(m);
+    this.noResistance = u(m);
+    this.cableThree = u(m);
+    this.byTable = u(m);
   }
 
   /** The origin: Ze for the earth loop, the source impedance for fault level. */

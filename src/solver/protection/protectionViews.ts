@@ -39,7 +39,7 @@ export function cableProtection(c: ViewContext, j: number): CableProtection {
   const cable: Cable = t.cables[j]!;
   const by = a.protBy[j]!;
   const device = deviceOf(c, j);
-  const ibA = t.ibA[j]!;
+  const ibA = t.ibA(j);
   const capOk = a.capOk[j] === 1;
   const izA = capOk ? a.izA[j]! : null;
   let cap: ReturnType<typeof cableCapacity> | undefined;
@@ -95,7 +95,7 @@ export function nodeProtection(c: ViewContext, v: number): NodeProtection {
   const p: NodeProtection = {
     zsOhm,
     zs: { rOhm: a.zhR[v]!, xOhm: a.zhX[v]! },
-    zsColdOhm: Math.hypot(a.zcR[v]!, a.zcX[v]!),
+    zsColdOhm: Math.hypot(a.zcR[v]!, a.zhX[v]!),
     zsMaxOhm: zsMax,
     testZsMaxOhm: zsMax === null ? null : TEST_ZS_FACTOR * zsMax,
     earthFaultA: (CMIN * u0V) / zsOhm,
@@ -177,7 +177,7 @@ export function protectedRecords(
   return {
     cables: attachingRecord<CableResult>(results.cables, done, (key, r) => {
       const j = t.cableOf(key);
-      if (j >= 0 && a.hasCable[j]) r.protection = cableProtection(c, j);
+      if (j >= 0 && a.hasCable[j] === 1) r.protection = cableProtection(c, j);
     }),
     nodes: attachingRecord<NodeResult>(results.nodes, done, attachNode),
     loads: attachingRecord<LoadResult>(results.loads, done, attachNode),

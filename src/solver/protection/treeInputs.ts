@@ -17,19 +17,23 @@ export interface TreeInputs {
   cables: readonly Cable[];
   /** Index of the supply the pass starts from, -1 where there is none. */
   root: number;
-  /** Fed cables, parents before children (the first `orderLength` entries). */
+  /** Fed nodes, parents before children: entries `orderStart` to `orderEnd` (the root excluded). */
   order: Int32Array;
-  orderLength: number;
+  orderStart: number;
+  orderEnd: number;
   cableFrom: Int32Array;
   cableTo: Int32Array;
-  /** The cable feeding each node in this tree, -1 where none. */
+  /** The cable feeding each fed node in this tree. */
   feeding: Int32Array;
+  /** 1 where the node is in the tree. */
+  reached: Uint8Array;
   /** Node kind codes (dropState KIND_*). */
   nodeKind: Uint8Array;
-  /** 1 where the results hold an entry for the cable. */
-  cableHasResult: Uint8Array;
-  ibA: Float64Array;
-  xOhmPerM: Float64Array;
+  /** 1 where the results hold an entry for the cable; null where every fed cable has one. */
+  cableHasResult: Uint8Array | null;
+  /** Design current Ib and reactance per metre (parallel cables combined) of a fed cable. */
+  ibA: (j: number) => number;
+  xOhmPerM: (j: number) => number;
   /** Element index of a result key, -1 where the key names no element of this tree. */
   cableOf: (id: string) => number;
   nodeOf: (id: string) => number;
@@ -46,41 +50,30 @@ const KINDS: Readonly<Record<string, number>> = {
 function fromDropState(doc: ProjectDocument, results: Results): TreeInputs | undefined {
   const s = dropStateOf(results);
   if (!s || s.nodes !== doc.nodes || s.cables !== doc.cables) return undefined;
-  const m = s.cableCount;
-  const order = new Int32Array(Math.max(0, s.orderLength - 1));
-  const feeding = new Int32Array(s.nodeCount).fill(-1);
-  const ibA = new Float64Array(m);
-  const xOhmPerM = new Float64Array(m);
-  const hasResult = new Uint8Array(m);
-  let len = 0;
-  for (let k = 1; k < s.orderLength; k++) {
-    const v = s.order[k] as number;
-    const j = s.parentCable[v] as number;
-    order[len++] = j;
-    feeding[v] = j;
-    hasResult[j] = 1;
-    ibA[j] = cableIbA(s, j);
-    // The same figure CableResultView.xOhmPerM gives (the oracle test holds the two together).
-    const row = s.cableRow[j];
-    const parallel = (s.cables[j] as { parallel?: unknown }).parallel;
-    const n = typeof parallel === 'number' && parallel >= 1 ? parallel : 1;
-    xOhmPerM[j] = row ? (row.xOhmPerM * (row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1)) / n : NaN;
-  }
+  const cables = s.cables;
   const cableIds = s.cableIds;
   const nodeIds = s.nodeIds;
   return {
     nodes: s.nodes,
     cables: s.cables,
     root: s.root >= 0 && s.nodeKind[s.root] === KIND_SUPPLY ? s.root : -1,
-    order,
-    orderLength: len,
+    order: s.order,
+    orderStart: 1,
+    orderEnd: s.orderLength,
     cableFrom: s.cableFrom,
     cableTo: s.cableTo,
-    feeding,
+    feeding: s.parentCable,
+    reached: s.reached,
     nodeKind: s.nodeKind,
-    cableHasResult: hasResult,
-    ibA,
-    xOhmPerM,
+    cableHasResult: null,
+    ibA: (j) => cableIbA(s, j),
+    // The same figure CableResultView.xOhmPerM gives (the oracle test holds the two together).
+    xOhmPerM: (j) => {
+      const row = s.cableRow[j];
+      const parallel = (cables[j] as { parallel?: unknown }).parallel;
+      const n = typeof parallel === 'number' && parallel >= 1 ? parallel : 1;
+      return row ? (row.xOhmPerM * (row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1)) / n : NaN;
+    },
     cableOf: (id) => {
       const j = s.cableIndex.get(id);
       return j !== undefined && cableIds[j] === id ? j : -1;
@@ -129,14 +122,15 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
   const supplyAt = nodes.findIndex((x) => x.kind === 'supply');
   const root = supplyAt >= 0 ? (nodeIndex.get(nodes[supplyAt]!.id) ?? -1) : -1;
   const feeding = new Int32Array(n).fill(-1);
-  const order = new Int32Array(m);
+  const order = new Int32Array(n);
   const hasResult = new Uint8Array(m);
   const ibA = new Float64Array(m);
   const xOhmPerM = new Float64Array(m);
   let len = 0;
+  const seen = new Uint8Array(n);
   if (root >= 0) {
-    const seen = new Uint8Array(n);
     seen[root] = 1;
+    order[len++] = root;
     const queue = [root];
     for (let head = 0; head < queue.length; head++) {
       for (const j of children.get(queue[head]!) ?? []) {
@@ -149,7 +143,7 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
         }
         seen[v] = 1;
         feeding[v] = j;
-        order[len++] = j;
+        order[len++] = v;
         queue.push(v);
         const cr = results.cables[c.id];
         if (!cr) continue;
@@ -164,14 +158,16 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
     cables,
     root,
     order,
-    orderLength: len,
+    orderStart: 1,
+    orderEnd: len,
     cableFrom,
     cableTo,
     feeding,
+    reached: seen,
     nodeKind,
     cableHasResult: hasResult,
-    ibA,
-    xOhmPerM,
+    ibA: (j) => ibA[j]!,
+    xOhmPerM: (j) => xOhmPerM[j]!,
     cableOf: (id) => cableIndex.get(id) ?? -1,
     nodeOf: (id) => nodeIndex.get(id) ?? -1,
   };

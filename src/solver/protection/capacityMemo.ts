@@ -1,0 +1,82 @@
+/**
+ * Per-solve memory of capacity figures and cpc k values: most cables of a large network share their
+ * construction, size and installation, so each distinct combination is looked up once. Lives for
+ * one attachProtection call only (documents may change between calls).
+ */
+import type { Cable, Cpc, Insulation } from '../../model/types.ts';
+import type { CapacityTable } from '../../catalogue/capacityTables.ts';
+import { cpcK } from '../../catalogue/kValues.ts';
+import { capacityFigures, type CapacityFigures } from './capacity.ts';
+
+const MATERIAL: Readonly<Record<string, number>> = { Cu: 0, Al: 1, steel: 2 };
+const INSULATION: Readonly<Record<string, number>> = { thermoplastic70: 0, thermosetting90: 1 };
+const CONSTRUCTION: Readonly<Record<string, number>> = {
+  flatTwinEarth: 0,
+  multicore: 1,
+  armouredMulticore: 2,
+  singleCore: 3,
+};
+const CPC_KIND: Readonly<Record<string, number>> = { core: 0, separate: 1, armour: 2 };
+
+type Figures = CapacityFigures | { error: string };
+
+export class CapacityMemo {
+  readonly #tables: readonly CapacityTable[];
+  readonly #byInstallation = new Map<object | undefined, Map<number, Figures>>();
+  readonly #sizeIds = new Map<number, number>();
+  readonly #k: number[] = [];
+
+  constructor(tables: readonly CapacityTable[]) {
+    this.#tables = tables;
+  }
+
+  /** capacityFigures(cable, tables), remembered by installation (same object) and cable type. */
+  figures(cable: Cable): Figures {
+    const mat = MATERIAL[cable.material];
+    const ins = INSULATION[cable.insulation];
+    const con = CONSTRUCTION[cable.construction];
+    const parallel = cable.parallel;
+    if (
+      mat === undefined ||
+      ins === undefined ||
+      con === undefined ||
+      !Number.isInteger(parallel) ||
+      parallel < 0 ||
+      parallel > 999
+    )
+      return capacityFigures(cable, this.#tables);
+    let sizeId = this.#sizeIds.get(cable.sizeMm2);
+    if (sizeId === undefined) {
+      sizeId = this.#sizeIds.size;
+      this.#sizeIds.set(cable.sizeMm2, sizeId);
+    }
+    const key =
+      (((sizeId * 1000 + parallel) * 4 + con) * 2 + ins) * 3 * 2 + mat * 2 + (cable.phases === 3 ? 1 : 0);
+    let byKey = this.#byInstallation.get(cable.installation);
+    if (!byKey) {
+      byKey = new Map();
+      this.#byInstallation.set(cable.installation, byKey);
+    }
+    let f = byKey.get(key);
+    if (!f) {
+      f = capacityFigures(cable, this.#tables);
+      byKey.set(key, f);
+    }
+    return f;
+  }
+
+  /** cpcK(cpc, insulation).k, remembered by kind, material, insulation and whether above 300 mm². */
+  cpcK(cpc: Cpc, insulation: Insulation): number {
+    const kind = CPC_KIND[cpc.kind];
+    const mat = MATERIAL[cpc.material];
+    const ins = INSULATION[insulation];
+    if (kind === undefined || mat === undefined || ins === undefined) return cpcK(cpc, insulation).k;
+    const key = ((kind * 3 + mat) * 2 + ins) * 2 + (cpc.sizeMm2 > 300 ? 1 : 0);
+    let k = this.#k[key];
+    if (k === undefined) {
+      k = cpcK(cpc, insulation).k;
+      this.#k[key] = k;
+    }
+    return k;
+  }
+}

@@ -1,0 +1,239 @@
+/**
+ * Sweep 3 of the protection pass: every check decided from the arrays, in document order. A check
+ * that fails or cannot be assessed becomes a finding with the message the check object would carry
+ * (the same message functions); passing checks cost no string. Findings are then put in walk
+ * order (each cable's, then its far node's), the order the checks are listed in.
+ */
+import type { Cable, Device, Load, NodeElement } from '../../model/types.ts';
+import type { Finding } from '../results.ts';
+import { CMIN, conventionalOperatingMultiple, settingA, type FuseDataSet } from '../../catalogue/devices.ts';
+import type { Check, CheckKey, MotorStartResult } from './protectionResults.ts';
+import type { Topology } from './topology.ts';
+import * as msg from './cableChecks.ts';
+import * as zsMsg from './zsCheck.ts';
+import {
+  fuseRow,
+  operatingCurrent,
+  operatingCurrentA,
+  operatingTimeS,
+  requiredDisconnectionS,
+} from './disconnection.ts';
+import { FAIL_CODES } from './protectionWorking.ts';
+import type { CapacityMemo } from './capacityMemo.ts';
+import type { TreeInputs } from './treeInputs.ts';
+import { motorStartFor } from '../motorStart.ts';
+import { faultMaxA, nodeName, type PassArrays } from './passArrays.ts';
+import type { PassContext } from './protectionPass.ts';
+
+/** Where the fuse data or the required time give no Ia (operatingCurrent answers with a reason). */
+function iaUnknown(device: Device, requiredS: number, fuses: FuseDataSet): boolean {
+  if (device.type === 'mcb' || device.type === 'rcbo' || device.type === 'mccb') return false;
+  if (!fuseRow(fuses, device.ratingA)) return true;
+  return !(requiredS === 5 || requiredS === 0.4 || (requiredS > 0.4 && requiredS < 5));
+}
+
+/** The id maps motorStartFor reads (built only when a motor is met). */
+function motorTopology(t: TreeInputs): Topology {
+  return {
+    order: [],
+    nodeById: new Map(t.nodes.map((n) => [n.id, n])),
+    cableById: new Map(t.cables.map((c) => [c.id, c])),
+    feeding: new Map(),
+    protecting: new Map(),
+    circuit: new Map(),
+  };
+}
+
+/** Findings with the walk position they belong at: 2 x rank for a cable's, 2 x rank + 1 for its node's. */
+class Tagged {
+  readonly list: Finding[] = [];
+  readonly tags: number[] = [];
+  failed = 0;
+  unassessed = 0;
+  fail(tag: number, key: CheckKey, elementId: string, message: string): void {
+    this.failed++;
+    this.push(tag, { code: FAIL_CODES[key], severity: 'error', elementId, message });
+  }
+  unknown(tag: number, elementId: string, message: string): void {
+    this.unassessed++;
+    this.push(tag, { code: 'checkNotAssessed', severity: 'warning', elementId, message });
+  }
+  push(tag: number, f: Finding): void {
+    this.list.push(f);
+    this.tags.push(tag);
+  }
+  /** A stable counting sort by tag onto `out`. */
+  appendSorted(out: Finding[], tagCount: number): void {
+    const n = this.list.length;
+    if (n === 0) return;
+    const start = new Int32Array(tagCount + 1);
+    for (let i = 0; i < n; i++) start[this.tags[i]! + 1]!++;
+    for (let k = 0; k < tagCount; k++) start[k + 1]! += start[k]!;
+    const base = out.length;
+    out.length = base + n;
+    for (let i = 0; i < n; i++) out[base + start[this.tags[i]!]!++] = this.list[i]!;
+  }
+}
+
+function deviceOf(cables: readonly Cable[], a: PassArrays, j: number): Device | null {
+  const by = a.protBy[j]!;
+  return by >= 0 ? (cables[by]!.device ?? null) : null;
+}
+
+/** Cable checks: Ib <= In, In <= Iz, I2 <= 1.45 Iz, breaking capacity, cpc (as cableChecks decides them). */
+function cableChecks(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagged): void {
+  const { t, u0V, fuses, supply } = ctx;
+  const { cables, cableFrom, cableTo } = t;
+  for (let j = 0; j < cables.length; j++) {
+    const state = a.hasCable[j];
+    if (!state) continue;
+    const tag = 2 * a.rank[j]!;
+    const cable = cables[j]!;
+    const id = cable.id;
+    if (state === 2) {
+      out.push(tag, {
+        code: 'noResistance',
+        severity: 'warning',
+        elementId: id,
+        message: `cable ${cable.name}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
+      });
+      continue;
+    }
+    const device = deviceOf(cables, a, j);
+    const inA = device ? settingA(device) : null;
+    if (device && inA !== null) {
+      a.requiredS[j] = requiredDisconnectionS(
+        supply.earthing,
+        a.circuit[j] ? 'distribution' : 'final',
+        inA,
+        u0V,
+      );
+    }
+    const ibA = t.ibA(j);
+    if (device && inA !== null && !(ibA <= inA))
+      out.fail(tag, 'ibIn', id, msg.ibInFailMessage(`cable ${cable.name}`, ibA, inA));
+    if (!a.capOk[j]) {
+      const cap = memo.figures(cable);
+      out.unknown(tag, id, msg.capacityErrorMessage(`cable ${cable.name}`, 'error' in cap ? cap.error : ''));
+    } else {
+      const izA = a.izA[j]!;
+      const base = inA ?? ibA;
+      if (!(base <= izA))
+        out.fail(
+          tag,
+          'inIz',
+          id,
+          msg.inIzFailMessage(`cable ${cable.name}`, inA === null ? 'Ib' : 'In', base, izA),
+        );
+      if (device && inA !== null) {
+        const i2 = conventionalOperatingMultiple(device.type, inA) * inA;
+        const lim = 1.45 * izA;
+        if (!(i2 <= lim)) out.fail(tag, 'i2', id, msg.i2FailMessage(`cable ${cable.name}`, i2, lim));
+      }
+    }
+    const own = cable.device;
+    if (own) {
+      const kA = faultMaxA(a, cableFrom[j]!, u0V) / 1000;
+      if (!(own.breakingKa >= kA))
+        out.fail(
+          tag,
+          'breaking',
+          id,
+          msg.breakingFailMessage(cable.name, kA, msg.sendingEnd(cable.name), own.breakingKa),
+        );
+    }
+    // Adiabatic check on the cpc at the far end's earth fault current.
+    const v = cableTo[j]!;
+    const earthFaultA = (CMIN * u0V) / Math.hypot(a.zhR[v]!, a.zhX[v]!);
+    const byTable = a.byTable[j] === 1;
+    const tS = device ? operatingTimeS(device, earthFaultA, fuses) : null;
+    if (tS === null) {
+      if (!byTable)
+        out.unknown(
+          tag,
+          id,
+          msg.cpcNotAssessedMessage(cable.name, device ? msg.CPC_WHY_SLOW : msg.CPC_WHY_NO_DEVICE),
+        );
+    } else {
+      const sMin = msg.adiabaticMinimumMm2(earthFaultA, tS, a.cpcK[j]!);
+      const cpcMm2 = a.cpcMm2[j]!;
+      if (!(cpcMm2 >= sMin || byTable))
+        out.fail(tag, 'cpc', id, msg.cpcFailMessage(cable.name, cpcMm2, sMin));
+    }
+  }
+}
+
+/** Node checks: Zs against the device's maximum (zsChecks), TT touch voltage, motor dip. */
+function nodeChecks(
+  ctx: PassContext,
+  a: PassArrays,
+  motors: Map<number, { result: MotorStartResult; check: Check }>,
+  out: Tagged,
+): void {
+  const { t, u0V, fuses, supply } = ctx;
+  const { nodes, cables, feeding } = t;
+  const tt = supply.earthing === 'TT';
+  let topo: Topology | undefined;
+  for (let v = 0; v < nodes.length; v++) {
+    if (!a.hasNode[v] || v === t.root) continue;
+    const j = feeding[v]!;
+    const tag = 2 * a.rank[j]! + 1;
+    const node: NodeElement = nodes[v]!;
+    const nid = node.id;
+    const zsOhm = Math.hypot(a.zhR[v]!, a.zhX[v]!);
+    const device = deviceOf(cables, a, j);
+    if (!device) out.unknown(tag, nid, zsMsg.zsNoDeviceMessage(nodeName(node, nid)));
+    else {
+      const requiredS = a.requiredS[j]!;
+      const rcd = device.rcd;
+      const rcdLimit = rcd && rcd.idnMa > 0 ? 50 / (rcd.idnMa / 1000) : null;
+      if (iaUnknown(device, requiredS, fuses)) {
+        const pass = rcdLimit !== null ? zsOhm <= rcdLimit : null;
+        if (pass !== true) {
+          const ia = operatingCurrent(device, requiredS, fuses);
+          const text = zsMsg.zsIaErrorMessage(nodeName(node, nid), 'error' in ia ? ia.error : '');
+          if (pass === false) out.fail(tag, 'zs', nid, text);
+          else out.unknown(tag, nid, text);
+        }
+      } else {
+        const zsMax = (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses);
+        a.zsMax[v] = zsMax;
+        a.zsMaxKnown[v] = 1;
+        const ok = zsOhm <= zsMax || (rcdLimit !== null && zsOhm <= rcdLimit);
+        if (!ok) out.fail(tag, 'zs', nid, zsMsg.zsFailMessage(nodeName(node, nid), zsOhm, zsMax, requiredS));
+      }
+      if (tt) {
+        const ra = supply.raOhm;
+        if (!rcd || !(rcd.idnMa > 0)) out.unknown(tag, nid, zsMsg.ttNoRcdMessage(nodeName(node, nid)));
+        else if (ra === undefined) out.unknown(tag, nid, zsMsg.ttNoRaMessage(nodeName(node, nid)));
+        else {
+          const volts = ra * (rcd.idnMa / 1000);
+          if (!(volts <= 50)) out.fail(tag, 'rcdTouch', nid, zsMsg.ttFailMessage(nodeName(node, nid), volts));
+        }
+      }
+    }
+    if (node.kind === 'load' && (node as Load).motor && ctx.results.loads[nid]) {
+      const motor = motorStartFor(node as Load, ctx.results, (topo ??= motorTopology(t)), ctx.source, u0V);
+      if (motor) {
+        motors.set(v, motor);
+        if (motor.check.pass === false) out.fail(tag, 'motorDip', nid, motor.check.message);
+        else if (motor.check.pass === null) out.unknown(tag, nid, motor.check.message);
+      }
+    }
+  }
+}
+
+/** Decides every check and appends the findings in walk order; returns the counts. */
+export function checkFindings(
+  ctx: PassContext,
+  a: PassArrays,
+  motors: Map<number, { result: MotorStartResult; check: Check }>,
+  memo: CapacityMemo,
+  findings: Finding[],
+): { failed: number; unassessed: number } {
+  const out = new Tagged();
+  cableChecks(ctx, a, memo, out);
+  nodeChecks(ctx, a, motors, out);
+  out.appendSorted(findings, 2 * ctx.t.orderEnd + 2);
+  return { failed: out.failed, unassessed: out.unassessed };
+}
