@@ -26,6 +26,11 @@ function demo(): ProjectDocument {
   return r.doc;
 }
 
+/** A protection result with its lazily built checks and working as own fields, for deep equality. */
+function plain<T extends { checks: unknown; working: unknown }>(p: T | undefined) {
+  return p && { ...p, checks: p.checks, working: p.working };
+}
+
 /** Every protection field of every element, both ways of reading: per element, then as JSON. */
 function expectSame(fast: Results, ref: Results): void {
   expect(Object.keys(fast.cables)).toEqual(Object.keys(ref.cables));
@@ -33,11 +38,11 @@ function expectSame(fast: Results, ref: Results): void {
   expect(Object.keys(fast.loads)).toEqual(Object.keys(ref.loads));
   for (const id of Object.keys(ref.cables)) {
     expect('protection' in fast.cables[id]!).toBe('protection' in ref.cables[id]!);
-    expect(fast.cables[id]!.protection).toEqual(ref.cables[id]!.protection);
+    expect(plain(fast.cables[id]!.protection)).toEqual(ref.cables[id]!.protection);
   }
   for (const id of Object.keys(ref.nodes)) {
     expect('protection' in fast.nodes[id]!).toBe('protection' in ref.nodes[id]!);
-    expect(fast.nodes[id]!.protection).toEqual(ref.nodes[id]!.protection);
+    expect(plain(fast.nodes[id]!.protection)).toEqual(ref.nodes[id]!.protection);
   }
   for (const id of Object.keys(ref.loads))
     expect(fast.loads[id]!.motorStart).toEqual(ref.loads[id]!.motorStart);
@@ -184,9 +189,9 @@ describe('attachProtection equals its eager reference form', () => {
         const viaLoads = fast.loads[id];
         expect((viaLoads ?? fast.nodes[id])!.protection?.checks).toEqual(ref.nodes[id]!.protection?.checks);
         expect(fast.nodes[id]).toBe(viaLoads ?? fast.nodes[id]);
-        expect(fast.nodes[id]!.protection).toEqual(ref.nodes[id]!.protection);
+        expect(plain(fast.nodes[id]!.protection)).toEqual(ref.nodes[id]!.protection);
         expect(fast.nodes[id]!.protection?.checks).toBe(fast.nodes[id]!.protection?.checks);
-        expect({ ...fast.cables }).toEqual({ ...ref.cables });
+        expect(JSON.stringify({ ...fast.cables })).toBe(JSON.stringify({ ...ref.cables }));
       }),
       { seed: 7, numRuns: 60 },
     );

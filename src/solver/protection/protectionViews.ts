@@ -1,14 +1,20 @@
 /**
  * Protection results built when they are first read. A cable's or node's `protection` is attached
  * the first time its result is read through the returned records; its figures come from the pass
- * arrays, and its `checks` and `working` are built on first read of each (then kept). All are own
- * enumerable properties, so spreading, `JSON.stringify` and deep equality see every field.
+ * arrays, and its `checks` and `working` are built on first read of each (then kept).
  */
-import type { Cable, Id, Supply } from '../../model/types.ts';
+import type { Cable, Device, Id, Supply } from '../../model/types.ts';
 import type { CableResult, LoadResult, NodeResult, Results } from '../results.ts';
 import type { CapacityTable } from '../../catalogue/capacityTables.ts';
 import { CMIN, TEST_ZS_FACTOR, type FuseDataSet } from '../../catalogue/devices.ts';
-import type { CableProtection, Check, MotorStartResult, NodeProtection } from './protectionResults.ts';
+import type {
+  CableProtection,
+  Check,
+  FaultLevel,
+  Impedance,
+  MotorStartResult,
+  NodeProtection,
+} from './protectionResults.ts';
 import type { Working } from '../results.ts';
 import { cableCapacity } from './capacity.ts';
 import { breakingCheck, capacityChecks, cpcCheck, sendingEnd } from './cableChecks.ts';
@@ -34,99 +40,163 @@ function deviceOf(c: ViewContext, j: number) {
   return by >= 0 ? (c.t.cables[by]!.device ?? null) : null;
 }
 
-export function cableProtection(c: ViewContext, j: number): CableProtection {
-  const { a, t } = c;
-  const cable: Cable = t.cables[j]!;
-  const by = a.protBy[j]!;
-  const device = deviceOf(c, j);
-  const ibA = t.ibA(j);
-  const capOk = a.capOk[j] === 1;
-  const izA = capOk ? a.izA[j]! : null;
-  let cap: ReturnType<typeof cableCapacity> | undefined;
-  const capacity = () => (cap ??= cableCapacity(cable, c.tables));
-  let checks: Check[] | undefined;
-  let working: Working[] | undefined;
-  return {
-    device,
-    deviceCableId: by >= 0 ? t.cables[by]!.id : null,
-    circuit: a.circuit[j] ? 'distribution' : 'final',
-    itA: capOk ? a.itA[j]! : null,
-    izA,
-    factors: capOk ? { ca: a.ca[j]!, cg: a.cg[j]!, ci: a.ci[j]! } : null,
-    capacityUse: izA ? ibA / izA : null,
-    r1r2HotOhm: a.r1r2Hot[j]!,
-    r1r2ColdOhm: a.r1r2Cold[j]!,
-    requiredTimeS: device ? a.requiredS[j]! : null,
-    get checks(): Check[] {
-      if (!checks) {
-        checks = capacityChecks(cable, ibA, device, capacity());
-        if (cable.device) {
-          const maxA = faultMaxA(a, t.cableFrom[j]!, c.u0V);
-          checks.push(breakingCheck(cable, cable.device, maxA, sendingEnd(cable.name)));
-        }
-        const v = t.cableTo[j]!;
-        const earthFaultA = (CMIN * c.u0V) / Math.hypot(a.zhR[v]!, a.zhX[v]!);
-        checks.push(cpcCheck(cable, device, earthFaultA, c.fuses));
+/**
+ * A segment's protection result. The figures are own fields (spreading copies them); `checks` and
+ * `working` are built on first read and kept, like the drop results' `working` (read them, they are
+ * not copied by `{...p}`); `toJSON` includes both.
+ */
+export class CableProtectionView implements CableProtection {
+  device: Device | null;
+  deviceCableId: Id | null;
+  circuit: 'final' | 'distribution';
+  itA: number | null;
+  izA: number | null;
+  factors: { ca: number; cg: number; ci: number } | null;
+  capacityUse: number | null;
+  r1r2HotOhm: number;
+  r1r2ColdOhm: number;
+  requiredTimeS: number | null;
+  readonly #c: ViewContext;
+  readonly #j: number;
+  #ibA: number;
+  #cap: ReturnType<typeof cableCapacity> | undefined;
+  #checks: Check[] | undefined;
+  #working: Working[] | undefined;
+
+  constructor(c: ViewContext, j: number) {
+    const { a, t } = c;
+    this.#c = c;
+    this.#j = j;
+    const by = a.protBy[j]!;
+    const device = deviceOf(c, j);
+    const ibA = t.ibA(j);
+    this.#ibA = ibA;
+    const capOk = a.capOk[j] === 1;
+    const izA = capOk ? a.izA[j]! : null;
+    this.device = device;
+    this.deviceCableId = by >= 0 ? t.cables[by]!.id : null;
+    this.circuit = a.circuit[j] ? 'distribution' : 'final';
+    this.itA = capOk ? a.itA[j]! : null;
+    this.izA = izA;
+    this.factors = capOk ? { ca: a.ca[j]!, cg: a.cg[j]!, ci: a.ci[j]! } : null;
+    this.capacityUse = izA ? ibA / izA : null;
+    this.r1r2HotOhm = a.r1r2Hot[j]!;
+    this.r1r2ColdOhm = a.r1r2Cold[j]!;
+    this.requiredTimeS = device ? a.requiredS[j]! : null;
+  }
+
+  #capacity() {
+    return (this.#cap ??= cableCapacity(this.#c.t.cables[this.#j]!, this.#c.tables));
+  }
+
+  /** Ib <= In, In <= Iz, I2 <= 1.45 Iz, breaking capacity and the cpc, each with its working. */
+  get checks(): Check[] {
+    if (!this.#checks) {
+      const { a, t, u0V, fuses } = this.#c;
+      const j = this.#j;
+      const cable: Cable = t.cables[j]!;
+      const checks = capacityChecks(cable, this.#ibA, this.device, this.#capacity());
+      if (cable.device) {
+        const maxA = faultMaxA(a, t.cableFrom[j]!, u0V);
+        checks.push(breakingCheck(cable, cable.device, maxA, sendingEnd(cable.name)));
       }
-      return checks;
-    },
-    set checks(value: Check[]) {
-      checks = value;
-    },
-    get working(): Working[] {
-      if (!working) {
-        const cp = capacity();
-        working = [...('error' in cp ? [] : [cp.working]), r1r2Working(cable, segmentLoop(cable)!)];
-      }
-      return working;
-    },
-    set working(value: Working[]) {
-      working = value;
-    },
-  };
+      const v = t.cableTo[j]!;
+      const earthFaultA = (CMIN * u0V) / Math.hypot(a.zhR[v]!, a.zhX[v]!);
+      checks.push(cpcCheck(cable, this.device, earthFaultA, fuses));
+      this.#checks = checks;
+    }
+    return this.#checks;
+  }
+  set checks(value: Check[]) {
+    this.#checks = value;
+  }
+
+  /** Working of Iz and R1 + R2. */
+  get working(): Working[] {
+    if (!this.#working) {
+      const cable = this.#c.t.cables[this.#j]!;
+      const cp = this.#capacity();
+      this.#working = [...('error' in cp ? [] : [cp.working]), r1r2Working(cable, segmentLoop(cable)!)];
+    }
+    return this.#working;
+  }
+  set working(value: Working[]) {
+    this.#working = value;
+  }
+
+  toJSON(): Record<string, unknown> {
+    return { ...(this as object), checks: this.checks, working: this.working };
+  }
 }
 
-export function nodeProtection(c: ViewContext, v: number): NodeProtection {
-  const { a, t, u0V } = c;
-  const zsOhm = Math.hypot(a.zhR[v]!, a.zhX[v]!);
-  const zsMax = a.zsMaxKnown[v] ? a.zsMax[v]! : null;
-  let checks: Check[] | undefined;
-  let working: Working[] | undefined;
-  const p: NodeProtection = {
-    zsOhm,
-    zs: { rOhm: a.zhR[v]!, xOhm: a.zhX[v]! },
-    zsColdOhm: Math.hypot(a.zcR[v]!, a.zhX[v]!),
-    zsMaxOhm: zsMax,
-    testZsMaxOhm: zsMax === null ? null : TEST_ZS_FACTOR * zsMax,
-    earthFaultA: (CMIN * u0V) / zsOhm,
-    fault: faultLevelAt(a, v, u0V),
-    get checks(): Check[] {
-      if (!checks) {
-        const j = v === t.root ? -1 : t.feeding[v]!;
-        if (j < 0) checks = [];
-        else {
-          const device = deviceOf(c, j);
-          const requiredS = device ? a.requiredS[j]! : 5;
-          const id = t.cables[j]!.to;
-          const name = nodeName(t.nodes[v], id);
-          checks = zsChecks(name, zsOhm, device, requiredS, c.supply, c.fuses).checks;
-          const motor = c.motors.get(v);
-          if (motor) checks.push(motor.check);
-        }
+/** A node's loop impedance and fault level; `checks` and `working` as for CableProtectionView. */
+export class NodeProtectionView implements NodeProtection {
+  zsOhm: number;
+  zs: Impedance;
+  zsColdOhm: number;
+  zsMaxOhm: number | null;
+  testZsMaxOhm: number | null;
+  earthFaultA: number;
+  fault: FaultLevel;
+  readonly #c: ViewContext;
+  readonly #v: number;
+  #checks: Check[] | undefined;
+  #working: Working[] | undefined;
+
+  constructor(c: ViewContext, v: number) {
+    const { a, u0V } = c;
+    this.#c = c;
+    this.#v = v;
+    const zsOhm = Math.hypot(a.zhR[v]!, a.zhX[v]!);
+    const zsMax = a.zsMaxKnown[v] ? a.zsMax[v]! : null;
+    this.zsOhm = zsOhm;
+    this.zs = { rOhm: a.zhR[v]!, xOhm: a.zhX[v]! };
+    // The cold loop has the hot loop's reactance.
+    this.zsColdOhm = Math.hypot(a.zcR[v]!, a.zhX[v]!);
+    this.zsMaxOhm = zsMax;
+    this.testZsMaxOhm = zsMax === null ? null : TEST_ZS_FACTOR * zsMax;
+    this.earthFaultA = (CMIN * u0V) / zsOhm;
+    this.fault = faultLevelAt(a, v, u0V);
+  }
+
+  /** Zs against the device's maximum, the TT touch-voltage condition and a motor's starting dip. */
+  get checks(): Check[] {
+    if (!this.#checks) {
+      const c = this.#c;
+      const { a, t } = c;
+      const v = this.#v;
+      const j = v === t.root ? -1 : t.feeding[v]!;
+      if (j < 0) this.#checks = [];
+      else {
+        const device = deviceOf(c, j);
+        const requiredS = device ? a.requiredS[j]! : 5;
+        const name = nodeName(t.nodes[v], t.cables[j]!.to);
+        const checks = zsChecks(name, this.zsOhm, device, requiredS, c.supply, c.fuses).checks;
+        const motor = c.motors.get(v);
+        if (motor) checks.push(motor.check);
+        this.#checks = checks;
       }
-      return checks;
-    },
-    set checks(value: Check[]) {
-      checks = value;
-    },
-    get working(): Working[] {
-      return (working ??= [zsWorking(c.supply, p), pfcWorking(c.source.basis, p, u0V)]);
-    },
-    set working(value: Working[]) {
-      working = value;
-    },
-  };
-  return p;
+    }
+    return this.#checks;
+  }
+  set checks(value: Check[]) {
+    this.#checks = value;
+  }
+
+  /** Working of Zs and the prospective fault current. */
+  get working(): Working[] {
+    return (this.#working ??= [
+      zsWorking(this.#c.supply, this),
+      pfcWorking(this.#c.source.basis, this, this.#c.u0V),
+    ]);
+  }
+  set working(value: Working[]) {
+    this.#working = value;
+  }
+
+  toJSON(): Record<string, unknown> {
+    return { ...(this as object), checks: this.checks, working: this.working };
+  }
 }
 
 /**
@@ -138,12 +208,15 @@ function attachingRecord<T extends object>(
   done: WeakSet<object>,
   attach: (key: string, value: T) => void,
 ): Record<Id, T> {
-  const read = (key: string | symbol): T | undefined => {
-    const value = (inner as Record<string | symbol, T | undefined>)[key];
+  const attachOnce = (key: string | symbol, value: unknown) => {
     if (typeof key === 'string' && typeof value === 'object' && value !== null && !done.has(value)) {
       done.add(value);
-      attach(key, value);
+      attach(key, value as T);
     }
+  };
+  const read = (key: string | symbol): T | undefined => {
+    const value = (inner as Record<string | symbol, T | undefined>)[key];
+    attachOnce(key, value);
     return value;
   };
   return new Proxy(Object.create(null) as Record<Id, T>, {
@@ -151,8 +224,12 @@ function attachingRecord<T extends object>(
     has: (_t, key) => key in inner,
     ownKeys: () => Reflect.ownKeys(inner),
     getOwnPropertyDescriptor: (_t, key) => {
-      if (!Object.prototype.hasOwnProperty.call(inner, key)) return undefined;
-      return { value: read(key), writable: true, enumerable: true, configurable: true };
+      // One look-up in the underlying record (which builds the entry), not a test and a read.
+      const d = Reflect.getOwnPropertyDescriptor(inner, key);
+      if (!d) return undefined;
+      const value = 'value' in d ? (d.value as unknown) : read(key);
+      attachOnce(key, value);
+      return { value, writable: true, enumerable: true, configurable: true };
     },
     set: (_t, key, value: T) => Reflect.set(inner, key, value),
     defineProperty: (_t, key, descriptor) => Reflect.defineProperty(inner, key, descriptor),
@@ -170,14 +247,14 @@ export function protectedRecords(
   const attachNode = (key: string, r: NodeResult) => {
     const v = t.nodeOf(key);
     if (v < 0 || !a.hasNode[v]) return;
-    r.protection = nodeProtection(c, v);
+    r.protection = new NodeProtectionView(c, v);
     const motor = c.motors.get(v);
     if (motor) (r as LoadResult).motorStart = motor.result;
   };
   return {
     cables: attachingRecord<CableResult>(results.cables, done, (key, r) => {
       const j = t.cableOf(key);
-      if (j >= 0 && a.hasCable[j] === 1) r.protection = cableProtection(c, j);
+      if (j >= 0 && a.hasCable[j] === 1) r.protection = new CableProtectionView(c, j);
     }),
     nodes: attachingRecord<NodeResult>(results.nodes, done, attachNode),
     loads: attachingRecord<LoadResult>(results.loads, done, attachNode),
