@@ -42,10 +42,10 @@ export function motorStartFor(
     const cable = topo.cableById.get(cid);
     const cr = results.cables[cid];
     if (!cable || !cr) continue;
-    const n = Math.max(1, cable.parallel);
+    // The per-metre figures of a cable result already combine its parallel cables.
     z = {
-      rOhm: z.rOhm + (loopFactor * cr.rOhmPerM * cable.lengthM) / n,
-      xOhm: z.xOhm + (loopFactor * cr.xOhmPerM * cable.lengthM) / n,
+      rOhm: z.rOhm + loopFactor * cr.rOhmPerM * cable.lengthM,
+      xOhm: z.xOhm + loopFactor * cr.xOhmPerM * cable.lengthM,
     };
     if (topo.nodeById.get(cable.to)?.kind === 'board') {
       boardZ = { ...z };

@@ -131,8 +131,8 @@ export function attachProtectionReference(
       });
       continue;
     }
-    const n = Math.max(1, cable.parallel);
-    const xLen = (cr.xOhmPerM * cable.lengthM) / n;
+    // cr.xOhmPerM already combines parallel cables (the drop solver divides by their number).
+    const xLen = cr.xOhmPerM * cable.lengthM;
     const a: Acc = {
       // The earth loop is line out and cpc back: its reactance is taken as twice the line's.
       zsHot: add(up.zsHot, seg.r1r2HotOhm, 2 * xLen),

@@ -79,7 +79,8 @@ function cableFigures(t: TreeInputs, a: PassArrays, memo: CapacityMemo): void {
     a.r1r2Hot[j] = hot / n;
     a.r1r2Cold[j] = ((r1 + r2) * lengthM) / n;
     a.r1Cold[j] = (r1 * lengthM) / n;
-    a.xLen[j] = (t.xOhmPerM(j) * lengthM) / n;
+    // t.xOhmPerM already combines parallel cables; dividing again would understate X.
+    a.xLen[j] = t.xOhmPerM(j) * lengthM;
     a.cableThree[j] = cable.phases === 3 ? 1 : 0;
     const cap = memo.figures(cable);
     if (!('error' in cap)) {
