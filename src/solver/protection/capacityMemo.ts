@@ -3,10 +3,10 @@
  * construction, size and installation, so each distinct combination is looked up once. Lives for
  * one attachProtection call only (documents may change between calls).
  */
-import type { Cable, Cpc, Insulation } from '../../model/types.ts';
+import type { Cable, Cpc, Installation, Insulation } from '../../model/types.ts';
 import type { CapacityTable } from '../../catalogue/capacityTables.ts';
 import { cpcK } from '../../catalogue/kValues.ts';
-import { capacityFigures, type CapacityFigures } from './capacity.ts';
+import { capacityFigures, REFERENCE_INSTALLATION, type CapacityFigures } from './capacity.ts';
 
 const MATERIAL: Readonly<Record<string, number>> = { Cu: 0, Al: 1, steel: 2 };
 const INSULATION: Readonly<Record<string, number>> = { thermoplastic70: 0, thermosetting90: 1 };
@@ -22,7 +22,11 @@ type Figures = CapacityFigures | { error: string };
 
 export class CapacityMemo {
   readonly #tables: readonly CapacityTable[];
-  readonly #byInstallation = new Map<object | undefined, Map<number, Figures>>();
+  /** Installation conditions by content (method, ambient, grouping, arrangement, Ci) to cable types. */
+  readonly #byInstallation = new Map<string, Map<number, Map<number, Map<string, Map<number, Map<number, Figures>>>>>>();
+  /** The last conditions met and their entry: most cables of a design share them. */
+  #lastInst: Installation | undefined;
+  #lastByKey: Map<number, Figures> | undefined;
   readonly #sizeIds = new Map<number, number>();
   readonly #k: number[] = [];
 
@@ -30,7 +34,35 @@ export class CapacityMemo {
     this.#tables = tables;
   }
 
-  /** capacityFigures(cable, tables), remembered by installation (same object) and cable type. */
+  /** The memory for one set of installation conditions, found by content (capacityFigures reads only these fields). */
+  #forInstallation(inst: Installation): Map<number, Figures> {
+    const last = this.#lastInst;
+    if (
+      last !== undefined &&
+      (last === inst ||
+        (last.method === inst.method &&
+          Object.is(last.ambientC, inst.ambientC) &&
+          Object.is(last.groupedCircuits, inst.groupedCircuits) &&
+          last.groupArrangement === inst.groupArrangement &&
+          Object.is(last.insulationFactor, inst.insulationFactor)))
+    )
+      return this.#lastByKey!;
+    let a = this.#byInstallation.get(inst.method);
+    if (!a) this.#byInstallation.set(inst.method, (a = new Map()));
+    let b = a.get(inst.ambientC);
+    if (!b) a.set(inst.ambientC, (b = new Map()));
+    let c = b.get(inst.groupedCircuits);
+    if (!c) b.set(inst.groupedCircuits, (c = new Map()));
+    let d = c.get(inst.groupArrangement);
+    if (!d) c.set(inst.groupArrangement, (d = new Map()));
+    let byKey = d.get(inst.insulationFactor);
+    if (!byKey) d.set(inst.insulationFactor, (byKey = new Map()));
+    this.#lastInst = inst;
+    this.#lastByKey = byKey;
+    return byKey;
+  }
+
+  /** capacityFigures(cable, tables), remembered by installation conditions and cable type. */
   figures(cable: Cable): Figures {
     const mat = MATERIAL[cable.material];
     const ins = INSULATION[cable.insulation];
@@ -52,11 +84,16 @@ export class CapacityMemo {
     }
     const key =
       (((sizeId * 1000 + parallel) * 4 + con) * 2 + ins) * 3 * 2 + mat * 2 + (cable.phases === 3 ? 1 : 0);
-    let byKey = this.#byInstallation.get(cable.installation);
-    if (!byKey) {
-      byKey = new Map();
-      this.#byInstallation.set(cable.installation, byKey);
-    }
+    const inst = cable.installation ?? REFERENCE_INSTALLATION;
+    if (
+      typeof inst.method !== 'string' ||
+      typeof inst.groupArrangement !== 'string' ||
+      typeof inst.ambientC !== 'number' ||
+      typeof inst.groupedCircuits !== 'number' ||
+      typeof inst.insulationFactor !== 'number'
+    )
+      return capacityFigures(cable, this.#tables);
+    const byKey = this.#forInstallation(inst);
     let f = byKey.get(key);
     if (!f) {
       f = capacityFigures(cable, this.#tables);
