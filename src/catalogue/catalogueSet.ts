@@ -7,6 +7,8 @@
  * The protection engineer's modules may add optional fields for devices and capacity tables.
  */
 import type { Construction, Insulation, Material } from '../model/types.ts';
+import type { CapacityTable } from './capacityTables.ts';
+import type { FuseDataSet } from './devices.ts';
 
 /** Per-metre figures of one line conductor of one cable type and size. */
 export interface ConductorRow {
@@ -33,4 +35,8 @@ export interface CatalogueSet {
   /** Where the data come from (standard and table, or data sheet and date). */
   source: string;
   conductors: readonly ConductorRow[];
+  /** Capacity tables replacing the built-in ones (a licensed set); absent: the built-in tables. */
+  capacityTables?: readonly CapacityTable[];
+  /** gG fuse time-current data replacing the built-in set; absent: the built-in set. */
+  ggFuses?: FuseDataSet;
 }

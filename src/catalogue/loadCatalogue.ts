@@ -10,6 +10,7 @@
  */
 import type { CatalogueSet, ConductorRow } from './catalogueSet.ts';
 import { OPERATING_TEMP_C } from './builtinConductors.ts';
+import { readProtectionData } from './loadProtectionData.ts';
 
 export type CatalogueLoad = { ok: true; catalogue: CatalogueSet } | { ok: false; errors: string[] };
 
@@ -146,7 +147,18 @@ export function parseCatalogueJson(text: string): CatalogueLoad {
     return { ok: false, errors: ['the file must hold one object with id, title, source and conductors.'] };
   const raw = data as Raw;
   if (!Array.isArray(raw.conductors)) return { ok: false, errors: ['conductors: must be a list of rows.'] };
-  return finish(raw, raw.conductors as Raw[], (i) => `conductors row ${i + 1}`);
+  const loaded = finish(raw, raw.conductors as Raw[], (i) => `conductors row ${i + 1}`);
+  const protection = readProtectionData(raw);
+  if (!loaded.ok || protection.errors.length > 0)
+    return { ok: false, errors: [...(loaded.ok ? [] : loaded.errors), ...protection.errors] };
+  return {
+    ok: true,
+    catalogue: {
+      ...loaded.catalogue,
+      ...(protection.capacityTables ? { capacityTables: protection.capacityTables } : {}),
+      ...(protection.ggFuses ? { ggFuses: protection.ggFuses } : {}),
+    },
+  };
 }
 
 function splitCsvLine(line: string): string[] {
