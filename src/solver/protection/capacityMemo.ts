@@ -27,7 +27,8 @@ export class CapacityMemo {
   /** The last conditions met and their entry: most cables of a design share them. */
   #lastInst: Installation | undefined;
   #lastByKey: Map<number, Figures> | undefined;
-  readonly #sizeIds = new Map<number, number>();
+  /** Sizes met so far, their position the size's id (a few standard sizes: a scan beats hashing a double). */
+  readonly #sizes: number[] = [];
   readonly #k: number[] = [];
 
   constructor(tables: readonly CapacityTable[]) {
@@ -74,13 +75,19 @@ export class CapacityMemo {
       con === undefined ||
       !Number.isInteger(parallel) ||
       parallel < 0 ||
-      parallel > 999
+      parallel > 999 ||
+      typeof cable.sizeMm2 !== 'number' ||
+      Number.isNaN(cable.sizeMm2)
     )
       return capacityFigures(cable, this.#tables);
-    let sizeId = this.#sizeIds.get(cable.sizeMm2);
-    if (sizeId === undefined) {
-      sizeId = this.#sizeIds.size;
-      this.#sizeIds.set(cable.sizeMm2, sizeId);
+    const size = cable.sizeMm2;
+    const sizes = this.#sizes;
+    let sizeId = 0;
+    while (sizeId < sizes.length && sizes[sizeId] !== size) sizeId++;
+    if (sizeId === sizes.length) {
+      // Past the standard sizes the scan would grow with the document: work those out each time.
+      if (sizes.length >= 64) return capacityFigures(cable, this.#tables);
+      sizes.push(size);
     }
     const key =
       (((sizeId * 1000 + parallel) * 4 + con) * 2 + ins) * 3 * 2 + mat * 2 + (cable.phases === 3 ? 1 : 0);
