@@ -23,6 +23,9 @@ export class PassArrays {
   /** 1 where every segment from the origin is three-phase. */
   readonly three: Uint8Array;
   readonly zsMax: Float64Array;
+  /** |Zs| (hot) at the node, and at the far end of each cable with a result: taken as the walk sets the loop. */
+  readonly zsNode: Float64Array;
+  readonly zsCable: Float64Array;
   readonly zsMaxKnown: Uint8Array;
 
   /** 1 where the cable gets a protection result, 2 where it is reached but has no resistance data. */
@@ -55,7 +58,7 @@ export class PassArrays {
 
   constructor(n: number, m: number) {
     // One buffer for every array: one allocation per solve, not twenty-five.
-    const f64 = 8 * n + 12 * m;
+    const f64 = 9 * n + 13 * m;
     const i32 = 2 * m;
     const u8 = 4 * n + 7 * m;
     const buffer = new ArrayBuffer(f64 * 8 + i32 * 4 + u8);
@@ -83,6 +86,8 @@ export class PassArrays {
     this.fpR = f(n);
     this.fpX = f(n);
     this.zsMax = f(n);
+    this.zsNode = f(n);
+    this.zsCable = f(m);
     this.requiredS = f(m);
     this.r1r2Hot = f(m);
     this.r1r2Cold = f(m);

@@ -81,9 +81,9 @@ function deviceOf(cables: readonly Cable[], a: PassArrays, j: number): Device | 
 }
 
 /** Cable checks: Ib <= In, In <= Iz, I2 <= 1.45 Iz, breaking capacity, cpc (as cableChecks decides them). */
-function cableChecks(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagged, zs: Float64Array): void {
+function cableChecks(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagged): void {
   const { t, u0V, fuses, supply } = ctx;
-  const { cables, cableFrom, cableTo } = t;
+  const { cables, cableFrom } = t;
   // The fault level at a sending end, worked out once per node (NaN until then): siblings share it.
   const sendingKa = new Float64Array(t.nodes.length).fill(NaN);
   for (let j = 0; j < cables.length; j++) {
@@ -150,11 +150,7 @@ function cableChecks(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: T
         );
     }
     // Adiabatic check on the cpc at the far end's earth fault current.
-    const v = cableTo[j]!;
-    const zsOhm = Math.hypot(a.zhR[v]!, a.zhX[v]!);
-    // Kept for the far node's Zs check (the node this cable feeds, the same figure).
-    zs[v] = zsOhm;
-    const earthFaultA = (CMIN * u0V) / zsOhm;
+    const earthFaultA = (CMIN * u0V) / a.zsCable[j]!;
     const byTable = a.byTable[j] === 1;
     const tS = device ? operatingTimeS(device, earthFaultA, fuses) : null;
     if (tS === null) {
@@ -179,7 +175,6 @@ function nodeChecks(
   a: PassArrays,
   motors: Map<number, { result: MotorStartResult; check: Check }>,
   out: Tagged,
-  zs: Float64Array,
 ): void {
   const { t, u0V, fuses, supply } = ctx;
   const { nodes, cables, feeding } = t;
@@ -191,7 +186,7 @@ function nodeChecks(
     const tag = 2 * a.rank[j]! + 1;
     const node: NodeElement = nodes[v]!;
     const nid = node.id;
-    const zsOhm = zs[v]!;
+    const zsOhm = a.zsNode[v]!;
     const device = deviceOf(cables, a, j);
     if (!device) out.unknown(tag, nid, zsMsg.zsNoDeviceMessage(nodeName(node, nid)));
     else {
@@ -243,10 +238,8 @@ export function checkFindings(
   findings: Finding[],
 ): { failed: number; unassessed: number } {
   const out = new Tagged();
-  // |Zs| at every node with a result, from the cable feeding it (cableChecks) for the node's checks.
-  const zs = new Float64Array(ctx.t.nodes.length);
-  cableChecks(ctx, a, memo, out, zs);
-  nodeChecks(ctx, a, motors, out, zs);
+  cableChecks(ctx, a, memo, out);
+  nodeChecks(ctx, a, motors, out);
   out.appendSorted(findings, 2 * ctx.t.orderEnd + 2);
   return { failed: out.failed, unassessed: out.unassessed };
 }

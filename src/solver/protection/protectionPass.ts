@@ -124,8 +124,13 @@ function accumulate(t: TreeInputs, a: PassArrays): void {
     const r1Cold = a.r1Cold[j]!;
     const xLen = a.xLen[j]!;
     // The earth loop is line out and cpc back: its reactance is taken as twice the line's.
-    a.zhR[v] = a.zhR[u]! + r1r2Hot;
-    a.zhX[v] = a.zhX[u]! + 2 * xLen;
+    const zhR = a.zhR[u]! + r1r2Hot;
+    const zhX = a.zhX[u]! + 2 * xLen;
+    a.zhR[v] = zhR;
+    a.zhX[v] = zhX;
+    const zs = Math.hypot(zhR, zhX);
+    a.zsNode[v] = zs;
+    a.zsCable[j] = zs;
     a.zcR[v] = a.zcR[u]! + r1r2Cold;
     a.flR[v] = a.flR[u]! + 2 * r1Cold;
     a.flX[v] = a.flX[u]! + 2 * xLen;
