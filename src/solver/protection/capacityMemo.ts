@@ -23,7 +23,10 @@ type Figures = CapacityFigures | { error: string };
 export class CapacityMemo {
   readonly #tables: readonly CapacityTable[];
   /** Installation conditions by content (method, ambient, grouping, arrangement, Ci) to cable types. */
-  readonly #byInstallation = new Map<string, Map<number, Map<number, Map<string, Map<number, Map<number, Figures>>>>>>();
+  readonly #byInstallation = new Map<
+    string,
+    Map<number, Map<number, Map<string, Map<number, Map<number, Figures>>>>>
+  >();
   /** The last conditions met and their entry: most cables of a design share them. */
   #lastInst: Installation | undefined;
   #lastByKey: Map<number, Figures> | undefined;
