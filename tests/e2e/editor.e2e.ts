@@ -39,6 +39,8 @@ test('the demo opens with live cable labels that match the engine', async () => 
   const label = ed.cableLabel(cable.id);
   await label.waitFor();
   const lines = label.locator('.ed-edge-line');
+  // The reveal zooms in over 300 ms; the full two-line label appears once the zoom reaches it.
+  await expect.poll(() => lines.count(), { timeout: 5000 }).toBe(2);
   const [ib, dropV] = await ed.numbersIn(lines.nth(0));
   const [cum, dropPct] = await ed.numbersIn(lines.nth(1));
   const r = results.cables[cable.id]!;
