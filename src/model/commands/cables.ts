@@ -55,12 +55,48 @@ export function connectCable(
   const cableId = id ?? nextIdFor(doc, 'cable');
   const cable: Cable = {
     ...newCable(cableId, from, to, doc.settings.cableDefaults),
+    ...fitToEnds(doc, from, to),
     ...patch,
     id: cableId,
     from,
     to,
   };
   return ok({ ...doc, cables: [...doc.cables, cable] }, [cableId]);
+}
+
+/** How many phases reach `id`: a supply's own, or those of the cable that feeds it; null if unfed. */
+function phasesAvailableAt(doc: ProjectDocument, id: Id): 1 | 3 | null {
+  const node = doc.nodes.find((n) => n.id === id);
+  if (!node) return null;
+  if (node.kind === 'supply') return node.phases;
+  const feed = doc.cables.find((c) => c.to === id);
+  return feed ? feed.phases : null;
+}
+
+/**
+ * What a new cable takes from the elements it joins rather than from the project's defaults: a
+ * three-phase load, or a board or junction fed from a three-phase origin, gets a three-phase cable,
+ * and a three-phase cable is never flat twin-and-earth (which has only two cores); a single-phase
+ * load on a three-phase board keeps the single-phase default.
+ */
+function fitToEnds(doc: ProjectDocument, from: Id, to: Id): CablePatch {
+  const defaults = doc.settings.cableDefaults;
+  const down = doc.nodes.find((n) => n.id === to);
+  const available = phasesAvailableAt(doc, from);
+  let phases = defaults.phases;
+  if (down?.kind === 'load') phases = down.phases === 3 && available !== 1 ? 3 : 1;
+  else if (available !== null) phases = available;
+  if (phases === defaults.phases) return {};
+  if (phases === 1) return { phases };
+  const construction = defaults.construction === 'flatTwinEarth' ? 'multicore' : defaults.construction;
+  return {
+    phases,
+    construction,
+    cpc:
+      construction === defaults.construction
+        ? defaults.cpc
+        : { kind: 'core', sizeMm2: defaults.sizeMm2, material: defaults.material },
+  };
 }
 
 /** Merges a patch into one cable; `undefined` for an optional field (device, installation) removes it. */

@@ -5,13 +5,33 @@ import { JunctionSymbol, LoadSymbol, SupplySymbol, TransformerSymbol, loadTitle 
 import { statusLook } from '../status.ts';
 import type { Status } from '../../solver/results.ts';
 
-function Badge({ status, label, detail }: { status: Status | null; label: string; detail: number }) {
+/** The line voltage a three-phase system of this U0 is named by (400/230 V), as on nameplates. */
+const NOMINAL_LINE_V: Record<number, number> = { 127: 220, 220: 380, 230: 400, 240: 415, 277: 480 };
+function nominalLineVolts(u0V: number): number {
+  return NOMINAL_LINE_V[u0V] ?? Math.round(u0V * Math.sqrt(3));
+}
+
+function Badge({
+  status,
+  label,
+  detail,
+  feeds = false,
+}: {
+  status: Status | null;
+  label: string;
+  detail: number;
+  /** A board's status is that of the worst load it feeds, not of its own figure. */
+  feeds?: boolean;
+}) {
   const look = statusLook(status);
+  const title = feeds
+    ? `${look.word}: the worst load fed from this board is ${look.meaning}; the figure is the board's own drop from the origin`
+    : `${look.word}: ${look.meaning}`;
   return (
     <span
       className={`ed-badge ed-badge-${status ?? 'none'}`}
       style={{ color: look.colour, background: look.tint, borderColor: look.colour }}
-      title={`${look.word}: ${look.meaning}`}
+      title={title}
       data-testid="node-badge"
     >
       <span aria-hidden="true">{look.glyph}</span>
@@ -44,7 +64,10 @@ function ElementNodeView({ data, selected }: NodeProps<ElementFlowNode>) {
             <span className="ed-side-text">
               <strong>{element.name}</strong>
               <span>
-                {element.phases === 3 ? '3~' : '1~'} {element.u0V} V {element.earthing}
+                {element.phases === 3
+                  ? `3~ ${nominalLineVolts(element.u0V)}/${element.u0V}`
+                  : `1~ ${element.u0V}`}{' '}
+                V {element.earthing}
               </span>
             </span>
           )}
@@ -55,7 +78,7 @@ function ElementNodeView({ data, selected }: NodeProps<ElementFlowNode>) {
           <span className="ed-busbar" />
           <span className="ed-board-name">{detail > 0 ? element.name : ''}</span>
           <span className="ed-board-foot">
-            <Badge status={status} label={label} detail={detail} />
+            <Badge status={status} label={label} detail={detail} feeds />
           </span>
         </>
       )}

@@ -2,7 +2,8 @@
  * The compact text on each cable and node, by label mode. Pure: figures come from the solver's
  * results as they are; nothing is computed here beyond rounding for display.
  */
-import type { CableResult, NodeResult } from '../../solver/results.ts';
+import type { CableResult, NodeResult, Status } from '../../solver/results.ts';
+import type { Check } from '../../solver/protection/protectionResults.ts';
 import type { LabelMode } from '../../store/viewTypes.ts';
 
 export function fmt(value: number | null | undefined, digits: number): string {
@@ -108,5 +109,110 @@ export function cableLabelTitle(mode: LabelMode): string {
       return 'Prospective fault current at the far end';
     case 'capacity':
       return 'Design current Ib and current-carrying capacity Iz; Ib/Iz in % of Iz';
+  }
+}
+
+/**
+ * The status a label's colour, glyph and line style show, so they never contradict its figures:
+ * drop and current show the drop status (a cable or board takes the worst load it feeds); loop
+ * impedance shows Zs against the device's maximum at the point; fault level shows the breaking
+ * capacity of the device against the fault where it sits; capacity shows Ib <= In <= Iz and
+ * I2 <= 1.45 Iz. A passing check whose figure uses at least `closeShare` of its allowance is
+ * "close", as a drop past the close-to-limit share is. null: the check could not be assessed.
+ */
+export function cableStatus(
+  r: CableResult | undefined,
+  mode: LabelMode,
+  far: NodeResult | undefined,
+  closeShare: number,
+): Status | null {
+  if (!r) return null;
+  switch (mode) {
+    case 'drop':
+    case 'current':
+      return r.status;
+    case 'zs':
+      return nodeStatus(far, 'zs', closeShare);
+    case 'fault':
+      return checksStatus(r.protection?.checks, ['breaking'], null, closeShare);
+    case 'capacity':
+      return checksStatus(
+        r.protection?.checks,
+        ['ibIn', 'inIz', 'i2'],
+        r.protection?.capacityUse ?? null,
+        closeShare,
+      );
+  }
+}
+
+export function nodeStatus(r: NodeResult | undefined, mode: LabelMode, closeShare: number): Status | null {
+  if (!r) return null;
+  const p = r.protection;
+  switch (mode) {
+    case 'zs':
+      return checksStatus(
+        p?.checks,
+        ['zs', 'rcdTouch'],
+        p && p.zsMaxOhm !== null && p.zsMaxOhm > 0 ? p.zsOhm / p.zsMaxOhm : null,
+        closeShare,
+      );
+    default:
+      return r.status;
+  }
+}
+
+const RANK: Record<Status, number> = { within: 0, close: 1, over: 2 };
+
+/** The worse of two statuses; an unassessed one (null) gives way to any assessed one. */
+export function worseStatus(a: Status | null, b: Status | null): Status | null {
+  if (a === null) return b;
+  if (b === null) return a;
+  return RANK[b] > RANK[a] ? b : a;
+}
+
+/** Worst of the named checks; a pass is "close" when the share of its allowance used reaches closeShare. */
+function checksStatus(
+  checks: readonly Check[] | undefined,
+  keys: readonly Check['key'][],
+  share: number | null,
+  closeShare: number,
+): Status | null {
+  const relevant = (checks ?? []).filter((c) => keys.includes(c.key));
+  if (relevant.length === 0) return null;
+  if (relevant.some((c) => c.pass === false)) return 'over';
+  if (relevant.some((c) => c.pass === null)) return null;
+  let used = share ?? 0;
+  if (share === null) {
+    for (const c of relevant) {
+      if (c.value !== null && c.limit !== null && c.limit > 0) used = Math.max(used, c.value / c.limit);
+    }
+  }
+  return used >= closeShare ? 'close' : 'within';
+}
+
+/** What the status styling means in each label mode, for the key under the canvas. */
+export function statusBasis(mode: LabelMode): { short: string; long: string } {
+  switch (mode) {
+    case 'drop':
+    case 'current':
+      return {
+        short: 'drop; cables and boards: worst load fed',
+        long: 'Voltage drop against the limit. A cable or board is shown with the worst status of the loads it feeds, so an over-limit load far down marks its whole path.',
+      };
+    case 'zs':
+      return {
+        short: 'loop impedance Zs against the device maximum',
+        long: 'Earth fault loop impedance at each point against the largest Zs its protective device allows (or the RCD touch-voltage check); a cable shows its far end.',
+      };
+    case 'fault':
+      return {
+        short: 'fault level against breaking capacity',
+        long: 'Prospective fault current where each device sits against its breaking capacity; a board shows the worst device it holds, a load the device protecting it.',
+      };
+    case 'capacity':
+      return {
+        short: 'cables: Ib ≤ In ≤ Iz and I2 ≤ 1.45 Iz',
+        long: 'Cables: design current, device rating and current-carrying capacity (Ib ≤ In ≤ Iz, I2 ≤ 1.45 Iz); boards and loads keep their drop status.',
+      };
   }
 }

@@ -8,7 +8,17 @@ import type { Id, NodeElement, Position, ProjectDocument } from '../../model/typ
 import { NODE_SIZE } from '../../model/layout.ts';
 import type { Results } from '../../solver/results.ts';
 import type { LabelMode } from '../../store/viewTypes.ts';
-import { cableLabel, cableLabelTitle, cableShortLabel, fmt, nodeLabel } from './labels.ts';
+import {
+  cableLabel,
+  cableLabelTitle,
+  cableShortLabel,
+  cableStatus,
+  fmt,
+  nodeLabel,
+  nodeStatus,
+  worseStatus,
+} from './labels.ts';
+import type { Status } from '../../solver/results.ts';
 import { labelRaises } from './labelLayout.ts';
 import type { CableEdgeData, CableFlowEdge, Detail, ElementFlowNode, ElementNodeData } from './flowTypes.ts';
 import { Position as Side } from '@xyflow/react';
@@ -96,16 +106,34 @@ export function createFlowBuilder() {
     return out;
   }
 
+  /**
+   * In fault-level mode a point is judged by the devices that must break a fault there: a board
+   * by the worst device it holds (on the cables leaving it), a load by the device protecting it.
+   */
+  function deviceStatusAtNodes({ doc, results }: FlowInputs): Map<Id, Status | null> {
+    const out = new Map<Id, Status | null>();
+    const close = doc.settings.closeThreshold;
+    const kinds = new Map(doc.nodes.map((n) => [n.id, n.kind]));
+    for (const c of doc.cables) {
+      const s = cableStatus(results.cables[c.id], 'fault', undefined, close);
+      out.set(c.from, worseStatus(out.get(c.from) ?? null, s));
+      if (kinds.get(c.to) === 'load') out.set(c.to, worseStatus(out.get(c.to) ?? null, s));
+    }
+    return out;
+  }
+
   function nodes(input: FlowInputs): ElementFlowNode[] {
     const { doc, results, dragPositions, labelMode, showLabels, detail } = input;
     const selected = new Set(input.selection);
     const issues = problems(results);
+    const closeShare = doc.settings.closeThreshold;
+    const devices = labelMode === 'fault' ? deviceStatusAtNodes(input) : null;
     const next = new Map<Id, ElementFlowNode>();
     const list = doc.nodes.map((element) => {
       const r = results.nodes[element.id];
       const data: ElementNodeData = {
         element,
-        status: r?.status ?? null,
+        status: devices ? (devices.get(element.id) ?? null) : (nodeStatus(r, labelMode, closeShare) ?? null),
         label: showLabels ? nodeLabel(r, labelMode) : '',
         detail,
         problem: issues.get(element.id) ?? null,
@@ -181,7 +209,7 @@ export function createFlowBuilder() {
     const list = texts.map(({ cable, r, to, full, short, heading }) => {
       const data: CableEdgeData = {
         cable,
-        status: r?.status ?? null,
+        status: cableStatus(r, labelMode, results.nodes[cable.to], doc.settings.closeThreshold),
         lines: showLabels ? full : [],
         short: showLabels ? short : '',
         heading,

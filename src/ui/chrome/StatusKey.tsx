@@ -1,10 +1,13 @@
 import { STATUS_LOOK } from '../status.ts';
 import type { Status } from '../../solver/results.ts';
+import { useEditor } from '../../store/editorStore.ts';
+import { statusBasis } from '../canvas/labels.ts';
 
 const ORDER: (Status | 'none')[] = ['within', 'close', 'over', 'none'];
 
 /** The key to the status styling, always on screen: word, glyph, colour and line style together. */
 export function StatusKey() {
+  const basis = statusBasis(useEditor((s) => s.view.labelMode));
   return (
     <div className="ed-key" aria-label="Status key" data-testid="status-key">
       {ORDER.map((s) => {
@@ -26,11 +29,8 @@ export function StatusKey() {
           </span>
         );
       })}
-      <span
-        className="ed-key-note"
-        title="A cable or board is shown with the worst status of the loads it feeds, so an over-limit load far down marks its whole path."
-      >
-        cables and boards: worst load fed
+      <span className="ed-key-note" title={basis.long} data-testid="status-basis">
+        {basis.short}
       </span>
     </div>
   );

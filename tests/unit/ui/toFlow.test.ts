@@ -1,4 +1,6 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
+import { parseDocument } from '../../../src/model/parseDocument.ts';
 import { createFlowBuilder, type FlowInputs } from '../../../src/ui/canvas/toFlow.ts';
 import { cableLabel } from '../../../src/ui/canvas/labels.ts';
 import { solve } from '../../../src/solver/solve.ts';
@@ -64,5 +66,52 @@ describe('cable labels', () => {
     const [first, second] = cableLabel(r, 'drop', i.results.nodes['L2']);
     expect(first).toBe(`${r.ibA.toFixed(r.ibA >= 10 ? 1 : 2)} A · ${r.dropV.toFixed(2)} V`);
     expect(second).toBe(`Σ ${r.cumulativePct.value.toFixed(2)} % (+${r.dropPct.value.toFixed(2)} %)`);
+  });
+});
+
+describe('status styling follows the label mode', () => {
+  // The demo project (invented): its meter tails feed an over-limit load, so their drop status is
+  // "over", while their own capacity and the loop impedance at the main board pass.
+  function demo(): FlowInputs {
+    const parsed = parseDocument(readFileSync('public/demo-project.json', 'utf8'));
+    if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+    return { ...inputs(), doc: parsed.doc, results: solve(parsed.doc) };
+  }
+
+  test('capacity mode colours a cable by Ib <= In <= Iz and I2 <= 1.45 Iz, not by the drop it leads to', () => {
+    const i = demo();
+    const b = createFlowBuilder();
+    const drop = new Map(b.edges(i).map((e) => [e.id, e.data!.status]));
+    const capacity = b.edges({ ...i, labelMode: 'capacity' });
+    let differs = 0;
+    for (const e of capacity) {
+      const p = i.results.cables[e.id]!.protection!;
+      const checks = p.checks.filter((c) => ['ibIn', 'inIz', 'i2'].includes(c.key));
+      const expected = checks.some((c) => c.pass === false)
+        ? 'over'
+        : checks.some((c) => c.pass === null)
+          ? null
+          : p.capacityUse! >= i.doc.settings.closeThreshold
+            ? 'close'
+            : 'within';
+      expect(e.data!.status, e.id).toBe(expected);
+      if (e.data!.status !== drop.get(e.id)) differs++;
+    }
+    expect(differs).toBeGreaterThan(0);
+    const tails = i.doc.cables.find((c) => c.from === i.doc.nodes.find((n) => n.kind === 'supply')!.id)!;
+    expect(drop.get(tails.id)).toBe('over');
+    expect(capacity.find((e) => e.id === tails.id)!.data!.status).not.toBe('over');
+  });
+
+  test('loop impedance mode colours each point by Zs against its maximum', () => {
+    const i = demo();
+    const nodes = createFlowBuilder().nodes({ ...i, labelMode: 'zs' });
+    for (const n of nodes) {
+      const p = i.results.nodes[n.id]!.protection;
+      if (!p || p.zsMaxOhm === null) continue;
+      const share = p.zsOhm / p.zsMaxOhm;
+      const expected = share > 1 ? 'over' : share >= i.doc.settings.closeThreshold ? 'close' : 'within';
+      expect(n.data.status, n.id).toBe(expected);
+    }
   });
 });
