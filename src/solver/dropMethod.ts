@@ -1,6 +1,7 @@
 /** Small shared readers over the solver state, used by result objects and working records. */
 import type { Phase } from '../model/types.ts';
 import type { DropState } from './dropState.ts';
+import { hypot } from './hypot.ts';
 
 export type DropMethod = 'singlePhaseLoop' | 'balancedThreePhase' | 'unbalancedThreePhase';
 
@@ -21,9 +22,9 @@ export function dropMethod(s: DropState, j: number): DropMethod {
   const v = s.cableTo[j] as number;
   let ib = 0;
   for (let p = 0; p < 3; p++)
-    ib = Math.max(ib, Math.hypot(s.iRe[v * 3 + p] as number, s.iIm[v * 3 + p] as number));
+    ib = Math.max(ib, hypot(s.iRe[v * 3 + p] as number, s.iIm[v * 3 + p] as number));
   const scale = s.dropIScale[j] === 0 ? 1 : (s.dropIScale[j] as number);
-  const neutral = Math.hypot(s.nRe[j] as number, s.nIm[j] as number);
+  const neutral = hypot(s.nRe[j] as number, s.nIm[j] as number);
   // A rounding residue of a balanced set is ~1e-15 of the phase current.
   return neutral <= 1e-9 * Math.max(ib * scale, 1e-9) ? 'balancedThreePhase' : 'unbalancedThreePhase';
 }

@@ -42,7 +42,8 @@ export class FindingTail {
   }
 }
 
-function breadthFirstRank(s: DropState): Int32Array {
+/** Position of each reached node in breadth-first order (`s.rank`, filled on first use). */
+export function breadthFirstRank(s: DropState): Int32Array {
   if (!s.rankReady) {
     for (let k = 0; k < s.orderLength; k++) s.rank[s.order[k] as number] = k;
     s.rankReady = true;

@@ -15,6 +15,7 @@ import { KIND_BOARD, KIND_LOAD, PHASE_COS, PHASE_SIN } from './dropState.ts';
 import { assignCablePhases, supplyMask } from './phases.ts';
 import { setLoadCurrent } from './validateElements.ts';
 import { FindingTail } from './findingOrder.ts';
+import { hypot } from './hypot.ts';
 
 /**
  * The upward pass, leaves first: each reached load's phases and current phasors, the phases
@@ -79,7 +80,7 @@ export function cableIbA(s: DropState, j: number): number {
   let ib = 0;
   for (let p = 0; p < 3; p++) {
     if (!(mask & (1 << p))) continue;
-    const m = Math.hypot(s.iRe[v * 3 + p] as number, s.iIm[v * 3 + p] as number);
+    const m = hypot(s.iRe[v * 3 + p] as number, s.iIm[v * 3 + p] as number);
     if (m > ib) ib = m;
   }
   return ib;

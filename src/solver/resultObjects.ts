@@ -22,6 +22,7 @@ import type { DropMethod } from './dropMethod.ts';
 import { cableIbA } from './flow.ts';
 import { STATUS_WORDS, loadPhaseMask } from './judge.ts';
 import { cableWorking, nodeWorking } from './working.ts';
+import { hypot } from './hypot.ts';
 
 function statusOf(code: number): Status | null {
   return code < 0 ? null : (STATUS_WORDS[code] ?? null);
@@ -29,8 +30,8 @@ function statusOf(code: number): Status | null {
 
 function currentsAt(s: DropState, v: number, mask: number, nRe: number, nIm: number): PhaseCurrents {
   const b = v * 3;
-  const m = (p: number) => (mask & (1 << p) ? Math.hypot(s.iRe[b + p] as number, s.iIm[b + p] as number) : 0);
-  return { L1: m(0), L2: m(1), L3: m(2), N: Math.hypot(nRe, nIm) };
+  const m = (p: number) => (mask & (1 << p) ? hypot(s.iRe[b + p] as number, s.iIm[b + p] as number) : 0);
+  return { L1: m(0), L2: m(1), L3: m(2), N: hypot(nRe, nIm) };
 }
 
 function pctU0(s: DropState, volts: number): Percent {

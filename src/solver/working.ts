@@ -10,11 +10,12 @@ import { PHASE_NAMES, dropMethod, pathTo, phasesOf, worstCablePhase, worstNodeCu
 import { cableIbA, deviceRatingA } from './flow.ts';
 import { loadPhaseMask } from './judge.ts';
 import { longRunAllowancePct } from '../catalogue/limits.ts';
+import { hypot } from './hypot.ts';
 
 const r4 = (x: number) => Number(x.toPrecision(4));
 
 function phasorText(re: number, im: number): string {
-  const mag = Math.hypot(re, im);
+  const mag = hypot(re, im);
   const deg = (Math.atan2(im, re) * 180) / Math.PI;
   return `${r4(mag)} A ∠ ${deg.toFixed(1)}°`;
 }
@@ -180,8 +181,7 @@ function dropRecord(s: DropState, j: number, ib: number): Working {
   if (method === 'singlePhaseLoop') {
     const re = (s.iRe[v * 3 + p] as number) * scale;
     const im = (s.iIm[v * 3 + p] as number) * scale;
-    const cosPhi =
-      ib > 0 ? (re * Math.cos(phaseAngle(p)) + im * Math.sin(phaseAngle(p))) / Math.hypot(re, im) : 1;
+    const cosPhi = ib > 0 ? (re * Math.cos(phaseAngle(p)) + im * Math.sin(phaseAngle(p))) / hypot(re, im) : 1;
     inputs.push(
       {
         name: 'I',

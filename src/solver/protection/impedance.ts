@@ -7,6 +7,7 @@
 import type { Cable, Cpc, Insulation, Material, Settings, Supply } from '../../model/types.ts';
 import { atTemperature, resistance20OhmPerM } from '../../catalogue/iec60228.ts';
 import type { Impedance } from './protectionResults.ts';
+import { hypot } from '../hypot.ts';
 
 /** Maximum continuous conductor temperature, °C (IEC 60364-5-52 Table 52.1, check-values §1.5). */
 export function operatingTempC(insulation: Insulation): number {
@@ -123,5 +124,5 @@ export function sourceImpedance(supply: Supply, settings: Settings): SourceImped
 }
 
 export function magnitude(z: Impedance): number {
-  return Math.hypot(z.rOhm, z.xOhm);
+  return hypot(z.rOhm, z.xOhm);
 }

@@ -5,6 +5,7 @@
 import type { NodeElement, Supply } from '../../model/types.ts';
 import type { FaultLevel } from './protectionResults.ts';
 import { C_MAX, type SourceImpedance } from './impedance.ts';
+import { hypot } from '../hypot.ts';
 
 export class PassArrays {
   /** 1 where the node has loop impedance figures (the supply and every node reached through a segment with resistances). */
@@ -34,8 +35,6 @@ export class PassArrays {
   readonly ownDevice: Uint8Array;
   readonly noResistance: Uint8Array;
   readonly cableThree: Uint8Array;
-  /** Position of the cable in the walk from the origin (orders the findings). */
-  readonly rank: Int32Array;
   readonly r1Cold: Float64Array;
   /** Reactance of the segment, one conductor, parallel cables combined, ohms. */
   readonly xLen: Float64Array;
@@ -59,7 +58,7 @@ export class PassArrays {
   constructor(n: number, m: number) {
     // One buffer for every array: one allocation per solve, not twenty-five.
     const f64 = 9 * n + 13 * m;
-    const i32 = 2 * m;
+    const i32 = m;
     const u8 = 4 * n + 7 * m;
     const buffer = new ArrayBuffer(f64 * 8 + i32 * 4 + u8);
     let at = 0;
@@ -101,7 +100,6 @@ export class PassArrays {
     this.cpcMm2 = f(m);
     this.cpcK = f(m);
     this.protBy = i(m).fill(-1);
-    this.rank = i(m);
     this.acc = u(n);
     this.hasNode = u(n);
     this.three = u(n);
@@ -131,19 +129,19 @@ export class PassArrays {
 
 /** Line-neutral prospective fault current at a node (cables at 20 °C, cmax). */
 function lineNeutralA(a: PassArrays, v: number, u0V: number): number {
-  return (C_MAX * u0V) / Math.hypot(a.flR[v]!, a.flX[v]!);
+  return (C_MAX * u0V) / hypot(a.flR[v]!, a.flX[v]!);
 }
 
 /** The larger of the line-neutral and three-phase fault currents: what breaking capacity meets. */
 export function faultMaxA(a: PassArrays, v: number, u0V: number): number {
   const lnA = lineNeutralA(a, v, u0V);
-  const lllA = a.three[v] ? (C_MAX * u0V) / Math.hypot(a.fpR[v]!, a.fpX[v]!) : null;
+  const lllA = a.three[v] ? (C_MAX * u0V) / hypot(a.fpR[v]!, a.fpX[v]!) : null;
   return Math.max(lnA, lllA ?? 0);
 }
 
 export function faultLevelAt(a: PassArrays, v: number, u0V: number): FaultLevel {
   const lnA = lineNeutralA(a, v, u0V);
-  const lllA = a.three[v] ? (C_MAX * u0V) / Math.hypot(a.fpR[v]!, a.fpX[v]!) : null;
+  const lllA = a.three[v] ? (C_MAX * u0V) / hypot(a.fpR[v]!, a.fpX[v]!) : null;
   return { lnA, lllA, maxA: Math.max(lnA, lllA ?? 0), cMax: C_MAX };
 }
 

@@ -83,13 +83,13 @@ function deviceOf(cables: readonly Cable[], a: PassArrays, j: number): Device | 
 /** Cable checks: Ib <= In, In <= Iz, I2 <= 1.45 Iz, breaking capacity, cpc (as cableChecks decides them). */
 function cableChecks(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagged): void {
   const { t, u0V, fuses, supply } = ctx;
-  const { cables, cableFrom } = t;
+  const { cables, cableFrom, cableTo, rank } = t;
   // The fault level at a sending end, worked out once per node (NaN until then): siblings share it.
   const sendingKa = new Float64Array(t.nodes.length).fill(NaN);
   for (let j = 0; j < cables.length; j++) {
     const state = a.hasCable[j];
     if (!state) continue;
-    const tag = 2 * a.rank[j]!;
+    const tag = 2 * rank[cableTo[j]!]!;
     const cable = cables[j]!;
     const id = cable.id;
     if (state === 2) {
@@ -177,13 +177,13 @@ function nodeChecks(
   out: Tagged,
 ): void {
   const { t, u0V, fuses, supply } = ctx;
-  const { nodes, cables, feeding } = t;
+  const { nodes, cables, feeding, rank } = t;
   const tt = supply.earthing === 'TT';
   let topo: Topology | undefined;
   for (let v = 0; v < nodes.length; v++) {
     if (!a.hasNode[v] || v === t.root) continue;
     const j = feeding[v]!;
-    const tag = 2 * a.rank[j]! + 1;
+    const tag = 2 * rank[v]! + 1;
     const node: NodeElement = nodes[v]!;
     const nid = node.id;
     const zsOhm = a.zsNode[v]!;

@@ -26,6 +26,7 @@ import { KIND_BOARD, KIND_JUNCTION, type TreeInputs } from './treeInputs.ts';
 import { PassArrays } from './passArrays.ts';
 import { CapacityMemo } from './capacityMemo.ts';
 import { checkFindings } from './protectionFindings.ts';
+import { hypot } from '../hypot.ts';
 
 export interface PassContext {
   t: TreeInputs;
@@ -46,10 +47,10 @@ export interface PassOutcome {
 
 /** Final or distribution circuit: a segment into a junction is distribution if any beyond it is. */
 function circuits(t: TreeInputs, a: PassArrays): void {
-  const { order, feeding, cableFrom, cableTo, nodeKind } = t;
+  const { walk, feeding, cableFrom, cableTo, nodeKind } = t;
   const distJunction = new Uint8Array(t.nodes.length);
   for (let k = t.orderEnd - 1; k >= t.orderStart; k--) {
-    const j = feeding[order[k]!]!;
+    const j = feeding[walk[k]!]!;
     const v = cableTo[j]!;
     const dist = nodeKind[v] === KIND_BOARD || (nodeKind[v] === KIND_JUNCTION && distJunction[v] === 1);
     a.circuit[j] = dist ? 1 : 0;
@@ -105,12 +106,11 @@ function cableFigures(t: TreeInputs, a: PassArrays, memo: CapacityMemo): void {
 
 /** Sweep 2: outwards from the origin, arrays only. */
 function accumulate(t: TreeInputs, a: PassArrays): void {
-  const { order, feeding, cableFrom, nodeKind, cableHasResult } = t;
+  const { walk, feeding, cableFrom, nodeKind, cableHasResult } = t;
   for (let k = t.orderStart; k < t.orderEnd; k++) {
-    const v = order[k]!;
+    const v = walk[k]!;
     const j = feeding[v]!;
     const u = cableFrom[j]!;
-    a.rank[j] = k;
     // Own device or, through a junction, the one upstream (parents come first).
     const parent = nodeKind[u] === KIND_JUNCTION ? feeding[u]! : -1;
     a.protBy[j] = a.ownDevice[j] ? j : parent >= 0 ? a.protBy[parent]! : -1;
@@ -128,7 +128,7 @@ function accumulate(t: TreeInputs, a: PassArrays): void {
     const zhX = a.zhX[u]! + 2 * xLen;
     a.zhR[v] = zhR;
     a.zhX[v] = zhX;
-    const zs = Math.hypot(zhR, zhX);
+    const zs = hypot(zhR, zhX);
     a.zsNode[v] = zs;
     a.zsCable[j] = zs;
     a.zcR[v] = a.zcR[u]! + r1r2Cold;

@@ -23,6 +23,7 @@ import { segmentLoop, type SourceImpedance } from './impedance.ts';
 import { pfcWorking, r1r2Working, zsWorking } from './protectionWorking.ts';
 import type { TreeInputs } from './treeInputs.ts';
 import { faultLevelAt, faultMaxA, nodeName, type PassArrays } from './passArrays.ts';
+import { hypot } from '../hypot.ts';
 
 export interface ViewContext {
   t: TreeInputs;
@@ -101,7 +102,7 @@ export class CableProtectionView implements CableProtection {
         checks.push(breakingCheck(cable, cable.device, maxA, sendingEnd(cable.name)));
       }
       const v = t.cableTo[j]!;
-      const earthFaultA = (CMIN * u0V) / Math.hypot(a.zhR[v]!, a.zhX[v]!);
+      const earthFaultA = (CMIN * u0V) / hypot(a.zhR[v]!, a.zhX[v]!);
       checks.push(cpcCheck(cable, this.device, earthFaultA, fuses));
       this.#checks = checks;
     }
@@ -147,12 +148,12 @@ export class NodeProtectionView implements NodeProtection {
     const { a, u0V } = c;
     this.#c = c;
     this.#v = v;
-    const zsOhm = Math.hypot(a.zhR[v]!, a.zhX[v]!);
+    const zsOhm = hypot(a.zhR[v]!, a.zhX[v]!);
     const zsMax = a.zsMaxKnown[v] ? a.zsMax[v]! : null;
     this.zsOhm = zsOhm;
     this.zs = { rOhm: a.zhR[v]!, xOhm: a.zhX[v]! };
     // The cold loop has the hot loop's reactance.
-    this.zsColdOhm = Math.hypot(a.zcR[v]!, a.zhX[v]!);
+    this.zsColdOhm = hypot(a.zcR[v]!, a.zhX[v]!);
     this.zsMaxOhm = zsMax;
     this.testZsMaxOhm = zsMax === null ? null : TEST_ZS_FACTOR * zsMax;
     this.earthFaultA = (CMIN * u0V) / zsOhm;

@@ -9,6 +9,7 @@ import type { Results } from '../results.ts';
 import { dropStateOf } from '../solveDrop.ts';
 import { cableIbA } from '../flow.ts';
 import { KIND_BOARD, KIND_INVALID, KIND_JUNCTION, KIND_LOAD, KIND_SUPPLY } from '../dropState.ts';
+import { breadthFirstRank } from '../findingOrder.ts';
 
 export { KIND_BOARD, KIND_JUNCTION, KIND_LOAD };
 
@@ -17,10 +18,16 @@ export interface TreeInputs {
   cables: readonly Cable[];
   /** Index of the supply the pass starts from, -1 where there is none. */
   root: number;
-  /** Fed nodes, parents before children: entries `orderStart` to `orderEnd` (the root excluded). */
-  order: Int32Array;
+  /**
+   * Fed nodes, parents before children, in the order the sweeps visit them: entries `orderStart`
+   * to `orderEnd` (the root, at 0, excluded). Document order where the drop solver found it to be
+   * parents first (then the sweeps read memory front to back), else breadth-first.
+   */
+  walk: Int32Array;
   orderStart: number;
   orderEnd: number;
+  /** Position of each fed node in breadth-first order from the root (orders the findings). */
+  rank: Int32Array;
   cableFrom: Int32Array;
   cableTo: Int32Array;
   /** The cable feeding each fed node in this tree. */
@@ -57,9 +64,10 @@ function fromDropState(doc: ProjectDocument, results: Results): TreeInputs | und
     nodes: s.nodes,
     cables: s.cables,
     root: s.root >= 0 && s.nodeKind[s.root] === KIND_SUPPLY ? s.root : -1,
-    order: s.order,
+    walk: s.walk,
     orderStart: 1,
     orderEnd: s.orderLength,
+    rank: breadthFirstRank(s),
     cableFrom: s.cableFrom,
     cableTo: s.cableTo,
     feeding: s.parentCable,
@@ -128,6 +136,7 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
   const xOhmPerM = new Float64Array(m);
   let len = 0;
   const seen = new Uint8Array(n);
+  const rank = new Int32Array(n);
   if (root >= 0) {
     seen[root] = 1;
     order[len++] = root;
@@ -143,6 +152,7 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
         }
         seen[v] = 1;
         feeding[v] = j;
+        rank[v] = len;
         order[len++] = v;
         queue.push(v);
         const cr = results.cables[c.id];
@@ -157,9 +167,10 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
     nodes,
     cables,
     root,
-    order,
+    walk: order,
     orderStart: 1,
     orderEnd: len,
+    rank,
     cableFrom,
     cableTo,
     feeding,
