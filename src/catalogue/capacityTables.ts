@@ -5,6 +5,11 @@
  * These are documented data a user can replace with a licensed set (CatalogueSet.capacityTables).
  * Each table names its source and how far it was confirmed (check-values §7: C confirmed from a
  * stored reproduction, M from memory).
+ *
+ * No built-in table covers copper thermosetting multicore non-armoured cable (IEC 60364-5-52
+ * B.52.3/B.52.5/B.52.12, BS 7671 4E2A), copper thermoplastic armoured multicore (BS 7671 4D4A) or
+ * any aluminium cable: no public reproduction of those tables could be found to confirm the cells,
+ * so such cables are reported "not assessed" until a licensed table is loaded (docs/catalogue-data.md).
  */
 import type { Construction, InstallMethod, Insulation, Material } from '../model/types.ts';
 
@@ -131,11 +136,20 @@ const BS_4D5: CapacityTable = {
   },
 };
 
-/** BS 7671 Table 4E1A, single-core XLPE 90 °C non-armoured (check-values §7.6, confirmed). */
+/**
+ * BS 7671 Table 4E1A, single-core XLPE 90 °C non-armoured (check-values §7.6, confirmed).
+ * Method F (touching, on a perforated tray or in free air) is printed from 25 mm² only: two cables
+ * flat (column 8) for two loaded conductors and three cables in trefoil (column 10) for three, the
+ * lower of the trefoil and flat (column 9) columns at every size, since the model does not record
+ * the formation. Confirmed 25-300 mm² from the manufacturer reproduction (S14b), 25-70 mm² also from
+ * the distributor's (S14); column 10 also agrees at 25-300 mm² with IEC 60364-5-52 method F at
+ * 90 °C as a compressor instruction book quotes it (easymanua.ls/atlas-copco/ga-45plus/manual?p=166).
+ */
 const BS_4E1A: CapacityTable = {
   id: 'bs7671-4e1a',
   title: 'BS 7671 Table 4E1A, single-core thermosetting 90 °C, copper',
-  source: 'BS 7671 Table 4E1A (check-values §7.6, confirmed from two reproductions)',
+  source:
+    'BS 7671 Table 4E1A (check-values §7.6, confirmed from two reproductions [S14, S14b]; method F columns 8 and 10 confirmed 25-300 mm² from S14b, 25-70 mm² also from S14)',
   material: 'Cu',
   insulation: 'thermosetting90',
   constructions: ['singleCore'],
@@ -161,6 +175,13 @@ const BS_4E1A: CapacityTable = {
       amps: {
         2: [19, 25, 34, 46, 59, 81, 109, 143, 176, 228, 293, 355, 413, 476, 545, 644, 743],
         3: [17.5, 23, 31, 41, 54, 74, 99, 130, 161, 209, 268, 326, 379, 436, 500, 590, 681],
+      },
+    },
+    trayOrFreeAir: {
+      label: 'F (touching; 2 cables flat, 3 cables trefoil)',
+      amps: {
+        2: [null, null, null, null, null, null, null, 161, 200, 242, 310, 377, 437, 504, 575, 679, 783],
+        3: [null, null, null, null, null, null, null, 135, 169, 207, 268, 328, 383, 444, 510, 607, 703],
       },
     },
   },

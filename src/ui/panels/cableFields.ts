@@ -1,6 +1,7 @@
 /** The editable fields of a cable segment, its protective device and its installation. */
 import { standardSizes } from '../../catalogue/iec60228.ts';
-import type { Cable, Installation, PhaseCount } from '../../model/types.ts';
+import { sizesWithCapacity } from '../../catalogue/capacityTables.ts';
+import type { Cable, InstallMethod, Installation, PhaseCount } from '../../model/types.ts';
 import type { FieldGroup, NumberField, NumberRule } from './fieldSpec.ts';
 import { DEVICE_GROUP } from './deviceFields.ts';
 import {
@@ -22,6 +23,25 @@ const sizeOptions = (c: Cable) => {
   if (!sizes.includes(c.sizeMm2)) sizes.push(c.sizeMm2);
   return sizes.sort((a, b) => a - b).map((s) => ({ value: String(s), label: `${s} mm²` }));
 };
+
+/**
+ * Every method stays selectable (a file's own method is never altered), but one for which no
+ * built-in capacity table has a cell for this cable says so, so the list promises no check it
+ * cannot make.
+ */
+export const methodOptions = (c: Cable) =>
+  METHOD_OPTIONS.map((o) => {
+    const sizes = sizesWithCapacity({
+      material: c.material,
+      insulation: c.insulation,
+      construction: c.construction,
+      method: o.value as InstallMethod,
+      loaded: c.phases === 3 ? 3 : 2,
+    });
+    if (sizes.includes(c.sizeMm2)) return o;
+    const where = sizes.length ? `at ${c.sizeMm2} mm²` : 'for this cable';
+    return { value: o.value, label: `${o.label} – no capacity table ${where}, Iz not assessed` };
+  });
 
 // Offered when the user adds a device or an installation record; visible in the form at once so
 // the user replaces them with the real ones.
@@ -175,7 +195,7 @@ export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
         kind: 'choice',
         key: 'installation.method',
         label: 'Reference method',
-        options: METHOD_OPTIONS,
+        options: methodOptions,
         shown: (c) => c.installation !== undefined,
         get: (c) => c.installation?.method ?? 'clippedDirect',
         set: (c, v) => ({
