@@ -44,15 +44,29 @@ export function candidateSizes(cable: Cable): number[] {
   ).filter((s) => resistance20OhmPerM(cable.material, s) !== undefined);
 }
 
-/** The cable at another size; a full-size core cpc and the flat twin-and-earth pairing follow the line size. */
+/** Each resized cable remembers the cable as drawn, so repeated resizing never compounds. */
+const AS_DRAWN = new WeakMap<Cable, Cable>();
+
+/**
+ * The cable at another size. A full-size core cpc and the flat twin-and-earth pairing follow the
+ * line size. Armour used as the cpc is not in the built-in data, so it is judged on the safe side:
+ * a smaller cable is taken to have armour smaller in proportion to its line conductor (real armour
+ * shrinks less than that, so R2 is overstated), and a larger cable keeps the armour as drawn (real
+ * armour is larger). The proposal tells the user to enter the chosen cable's armour.
+ */
 export function resized(cable: Cable, sizeMm2: number): Cable {
-  let cpcMm2 = cable.cpc.sizeMm2;
-  if (cable.construction === 'flatTwinEarth' && FLAT_TWIN_EARTH_CPC_MM2[sizeMm2] !== undefined) {
+  const drawn = AS_DRAWN.get(cable) ?? cable;
+  let cpcMm2 = drawn.cpc.sizeMm2;
+  if (drawn.construction === 'flatTwinEarth' && FLAT_TWIN_EARTH_CPC_MM2[sizeMm2] !== undefined) {
     cpcMm2 = FLAT_TWIN_EARTH_CPC_MM2[sizeMm2]!;
-  } else if (cable.cpc.kind === 'core' && cable.cpc.sizeMm2 === cable.sizeMm2) {
+  } else if (drawn.cpc.kind === 'core' && drawn.cpc.sizeMm2 === drawn.sizeMm2) {
     cpcMm2 = sizeMm2;
+  } else if (drawn.cpc.kind === 'armour' && sizeMm2 < drawn.sizeMm2) {
+    cpcMm2 = Math.floor((10 * drawn.cpc.sizeMm2 * sizeMm2) / drawn.sizeMm2) / 10;
   }
-  return { ...cable, sizeMm2, cpc: { ...cable.cpc, sizeMm2: cpcMm2 } };
+  const out: Cable = { ...cable, sizeMm2, cpc: { ...cable.cpc, sizeMm2: cpcMm2 } };
+  AS_DRAWN.set(out, drawn);
+  return out;
 }
 
 export function withSizes(doc: ProjectDocument, sizes: ReadonlyMap<Id, number>): ProjectDocument {
@@ -105,15 +119,23 @@ export function diffSizes(
   for (const c of after.cables) {
     const b = byId.get(c.id);
     if (!b) continue;
-    if (b.sizeMm2 !== c.sizeMm2)
-      out.push({ cableId: c.id, field: 'sizeMm2', from: b.sizeMm2, to: c.sizeMm2, reason: reason(c) });
+    if (b.sizeMm2 !== c.sizeMm2) {
+      const armourKept = c.cpc.kind === 'armour' && b.cpc.sizeMm2 === c.cpc.sizeMm2;
+      const note = armourKept
+        ? `; armour kept at ${c.cpc.sizeMm2} mm² as drawn (a larger cable's armour is larger): enter the chosen cable's armour`
+        : '';
+      out.push({ cableId: c.id, field: 'sizeMm2', from: b.sizeMm2, to: c.sizeMm2, reason: reason(c) + note });
+    }
     if (b.cpc.sizeMm2 !== c.cpc.sizeMm2) {
       out.push({
         cableId: c.id,
         field: 'cpc.sizeMm2',
         from: b.cpc.sizeMm2,
         to: c.cpc.sizeMm2,
-        reason: 'follows the line conductor size',
+        reason:
+          c.cpc.kind === 'armour'
+            ? "armour taken smaller in proportion to the line size (on the safe side): enter the chosen cable's armour from its data sheet"
+            : 'follows the line conductor size',
       });
     }
   }
