@@ -17,6 +17,20 @@ export function currentsText(c: PhaseCurrents): string {
   return phaseList(c, 'A');
 }
 
+/** The load fed through `id` that uses the largest share of its drop budget, or null if none is solved. */
+function worstLoadFed(id: Id, r: NodeResult, results: Results): LoadResult | null {
+  // A node with no path is the supply (every load is fed from it) or unfed (nothing to show).
+  const into = r.path.at(-1);
+  if (into === undefined && r.status === null) return null;
+  let worst: LoadResult | null = null;
+  for (const l of Object.values(results.loads)) {
+    if (l.status === null) continue;
+    if (into !== undefined && !l.path.includes(into)) continue;
+    if (!worst || l.budgetUsed > worst.budgetUsed) worst = l;
+  }
+  return worst;
+}
+
 function isLoad(r: NodeResult | LoadResult): r is LoadResult {
   return 'limitPct' in r;
 }
@@ -36,6 +50,9 @@ export function NodeFigures({
   const r = results.loads[id] ?? results.nodes[id];
   if (!r) return <p className="dl-empty">No results for this element: see the findings for the reason.</p>;
   const profile = isLoad(r) ? buildProfile(doc, results, id) : null;
+  const balance = results.protection?.balance[id];
+  const worst = isLoad(r) ? null : worstLoadFed(id, r, results);
+  const nameOf = (nid: Id) => doc.nodes.find((n) => n.id === nid)?.name ?? nid;
   const cableName = (cid: Id) => doc.cables.find((c) => c.id === cid)?.name ?? cid;
   return (
     <div data-testid="node-figures">
@@ -46,6 +63,17 @@ export function NodeFigures({
         </dd>
         <dt>Cumulative drop from the origin</dt>
         <dd data-testid="figure-cumulative">{fmtPct(r.cumulativePct)}</dd>
+        {worst && (
+          <>
+            <dt>Worst load fed (sets the status)</dt>
+            <dd data-testid="figure-worst-load">
+              <button type="button" className="dl-linklike" onClick={() => onReveal(worst.id)}>
+                {nameOf(worst.id)}
+              </button>{' '}
+              {fmtPct(worst.cumulativePct)} of {fmtPct(worst.limitPct)}
+            </dd>
+          </>
+        )}
         {isLoad(r) && (
           <>
             <dt>Limit for this load</dt>
@@ -58,6 +86,16 @@ export function NodeFigures({
         <dd>{phaseList(r.voltageV, 'V')}</dd>
         <dt>Demand current in</dt>
         <dd>{currentsText(r.currentsA)}</dd>
+        {balance && (
+          <>
+            <dt>Phase imbalance</dt>
+            <dd data-testid="figure-imbalance" title="(Imax − Iavg) / Iavg, % of the average phase current">
+              {fmt(balance.imbalancePct, 0)} % (heaviest {balance.worstPhase})
+            </dd>
+            <dt>Neutral current</dt>
+            <dd>{fmt(balance.currentsA.N)} A</dd>
+          </>
+        )}
       </dl>
       {r.protection && (
         <NodeProtectionFigures p={r.protection} motor={isLoad(r) ? r.motorStart : undefined} />

@@ -122,4 +122,23 @@ describe('details panel', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/cannot be empty/);
     expect(editorStore.getState().doc.nodes.find((n) => n.id === 'L1')!.name).toBe('Heater');
   });
+
+  test('a board names the worst load it feeds, which sets its status, and shows its phase balance', () => {
+    const doc = smallNetwork();
+    loadIntoStore(doc, ['DB1']);
+    render(<DetailsPanel />);
+    fireEvent.click(screen.getByTestId('details-tab-results'));
+    const r = solve(doc);
+    const loads = ['L1', 'L2'].map((id) => r.loads[id]!);
+    const worst = loads.reduce((a, b) => (b.budgetUsed > a.budgetUsed ? b : a));
+    const name = doc.nodes.find((n) => n.id === worst.id)!.name;
+    expect(screen.getByTestId('figure-worst-load').textContent).toContain(name);
+    expect(screen.getByTestId('figure-worst-load').textContent).toContain(
+      worst.cumulativePct.value.toFixed(2),
+    );
+    const balance = r.protection!.balance['DB1']!;
+    expect(screen.getByTestId('figure-imbalance').textContent).toBe(
+      `${fmt(balance.imbalancePct, 0)} % (heaviest ${balance.worstPhase})`,
+    );
+  });
 });
