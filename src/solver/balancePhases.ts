@@ -140,6 +140,7 @@ export function proposePhaseBalance(doc: ProjectDocument, results: Results): Pha
     }
     const final: Record<Phase, number> = { L1: 0, L2: 0, L3: 0 };
     for (const p of PHASES) final[perm[PHASES.indexOf(p)]!] = totals[p];
+    const boardName = doc.nodes.find((n) => n.id === boardId)?.name ?? boardId;
     const before = Math.max(ways.L1, ways.L2, ways.L3);
     const after = Math.max(final.L1, final.L2, final.L3);
     if (after >= before - 1e-9) continue;
@@ -151,7 +152,7 @@ export function proposePhaseBalance(doc: ProjectDocument, results: Results): Pha
           field: 'phase',
           from: it.load.phase,
           to,
-          reason: `board ${boardId}: worst phase of the outgoing ways ${before.toFixed(1)} A -> ${after.toFixed(1)} A`,
+          reason: `${boardName === boardId ? `board ${boardId}` : `${boardName} (${boardId})`}: worst phase of the outgoing ways ${before.toFixed(1)} A -> ${after.toFixed(1)} A`,
         });
       }
     }
