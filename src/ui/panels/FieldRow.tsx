@@ -39,6 +39,7 @@ export function FieldRow<E, P>({ spec, element, owner, onCommit }: Props<E, P>) 
           <select
             id={id}
             value={spec.get(element)}
+            title={options.find((o) => o.value === spec.get(element))?.label}
             onChange={(e) => onCommit(spec.set(element, e.target.value))}
           >
             {options.map((o) => (
@@ -47,7 +48,6 @@ export function FieldRow<E, P>({ spec, element, owner, onCommit }: Props<E, P>) 
               </option>
             ))}
           </select>
-          <span className="dl-unit" />
         </div>
         {spec.hint && <div className="dl-hint">{spec.hint}</div>}
       </div>
