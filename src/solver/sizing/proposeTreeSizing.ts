@@ -14,6 +14,7 @@ import {
   candidateSizes,
   DEFAULT_SIZING,
   diffSizes,
+  failingBreaking,
   failingSizingChecks,
   resized,
   totalVolume,
@@ -45,6 +46,11 @@ export interface TreeSizingResult {
   savedPct: number;
   /** Which search produced the proposal (per-cable wins when the tree search finds nothing better). */
   method: 'tree' | 'perCable';
+  /**
+   * Cables whose device would fail its breaking-capacity check with the proposal and passes it as
+   * drawn: sizing does not claim breaking capacity (a larger cable raises the fault level).
+   */
+  newBreakingFailures: Id[];
 }
 
 /** Smallest size that carries the device setting (In <= Iz, I2 <= 1.45 Iz): a local lower bound. */
@@ -68,6 +74,36 @@ function stepDown(cable: Cable): number | undefined {
   return sizes[sizes.length - 1];
 }
 
+/**
+ * The starting dip is the starting current times the path's impedance, so each cable on the path is
+ * credited with the share of the needed cut that one size up would give: its resistance saved over
+ * the path's conductor resistance, against the share the dip must fall by.
+ */
+function creditMotorDip(
+  node: Results['nodes'][Id],
+  byId: ReadonlyMap<Id, Cable>,
+  credit: (c: Cable, amount: number) => void,
+): void {
+  const dip = node.protection?.checks.find((c) => c.key === 'motorDip');
+  if (!dip || dip.value === null || dip.limit === null || !(dip.value > 0)) return;
+  const needed = (dip.value - dip.limit) / dip.value;
+  const ohms = (c: Cable, size: number) =>
+    ((resistance20OhmPerM(c.material, size) ?? 0) * c.lengthM) / Math.max(1, c.parallel);
+  let pathOhm = 0;
+  for (const id of node.path) {
+    const c = byId.get(id);
+    if (c) pathOhm += ohms(c, c.sizeMm2);
+  }
+  if (!(pathOhm > 0)) return;
+  for (const id of node.path) {
+    const c = byId.get(id);
+    const up = c && stepUp(c);
+    if (!c || up === undefined) continue;
+    const saved = (ohms(c, c.sizeMm2) - ohms(c, up)) / pathOhm;
+    credit(c, Math.min(1, saved / Math.max(needed, 1e-9)));
+  }
+}
+
 /** How much a one-step upsizing of each cable helps the failing checks, per unit of added volume. */
 function bestUpgrade(
   doc: ProjectDocument,
@@ -85,6 +121,10 @@ function bestUpgrade(
     }
     const node = results.nodes[f.id];
     if (!node) continue;
+    if (f.key === 'motorDip') {
+      creditMotorDip(node, byId, credit);
+      continue;
+    }
     const zsCheck = node.protection?.checks.find((c) => c.key === 'zs');
     const lr = results.loads[f.id];
     const violation =
@@ -195,7 +235,10 @@ export function* sizeTreeSteps(
     chosen = yield* trim(baseline);
     method = 'perCable';
   }
-  const failing = failingSizingChecks(solve(chosen));
+  const chosenResults = solve(chosen);
+  const failing = failingSizingChecks(chosenResults);
+  const breakingBefore = new Set(failingBreaking(base));
+  const newBreakingFailures = failingBreaking(chosenResults).filter((id) => !breakingBefore.has(id));
   const vChosen = totalVolume(chosen);
   const reason =
     method === 'tree' ? 'least-volume tree sizing' : 'per-cable sizing (tree search found nothing smaller)';
@@ -210,6 +253,7 @@ export function* sizeTreeSteps(
     savedMm2M: vBaseline - vChosen,
     savedPct: vBaseline > 0 ? (100 * (vBaseline - vChosen)) / vBaseline : 0,
     method,
+    newBreakingFailures,
   };
 }
 

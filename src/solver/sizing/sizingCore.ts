@@ -18,8 +18,8 @@ export interface SizeChange {
   reason: string;
 }
 
-/** The checks a sizing claims to pass: capacity, overload, cpc withstand, Zs and drop. */
-export const SIZING_CHECKS = ['inIz', 'i2', 'cpc', 'zs', 'drop'] as const;
+/** The checks a sizing claims to pass: capacity, overload, cpc withstand, Zs, drop and motor starting dip. */
+export const SIZING_CHECKS = ['inIz', 'i2', 'cpc', 'zs', 'drop', 'motorDip'] as const;
 
 export interface SizingOptions {
   /** Share of each load's drop limit given to distribution circuits on its path (fixed split). */
@@ -90,7 +90,7 @@ export function totalVolume(doc: ProjectDocument): number {
   return v;
 }
 
-/** Element ids failing a claimed check in a solve: cables (capacity, cpc) and nodes (Zs, drop). */
+/** Element ids failing a claimed check in a solve: cables (capacity, cpc) and nodes (Zs, drop, motor dip). */
 export function failingSizingChecks(results: Results): { id: Id; key: string }[] {
   const out: { id: Id; key: string }[] = [];
   for (const cr of Object.values(results.cables)) {
@@ -101,10 +101,21 @@ export function failingSizingChecks(results: Results): { id: Id; key: string }[]
   }
   for (const nr of Object.values(results.nodes)) {
     for (const c of nr.protection?.checks ?? [])
-      if (c.pass === false && c.key === 'zs') out.push({ id: nr.id, key: 'zs' });
+      if (c.pass === false && (c.key === 'zs' || c.key === 'motorDip')) out.push({ id: nr.id, key: c.key });
   }
   for (const lr of Object.values(results.loads))
     if (lr.status === 'over') out.push({ id: lr.id, key: 'drop' });
+  return out;
+}
+
+/**
+ * Breaking-capacity checks failing in a solve. Sizing cannot fix them (a larger cable raises the
+ * fault level), so it does not claim them; it reports any its proposal would add.
+ */
+export function failingBreaking(results: Results): Id[] {
+  const out: Id[] = [];
+  for (const cr of Object.values(results.cables))
+    if (cr.protection?.checks.some((c) => c.key === 'breaking' && c.pass === false)) out.push(cr.id);
   return out;
 }
 

@@ -70,13 +70,19 @@ export function sizingSummary(r: TreeSizingResult): string[] {
       : 'The whole-tree search found nothing smaller, so this is the per-cable sizing.',
   ];
   if (r.passes)
-    lines.push('With the proposal in full, every capacity, overload, cpc, Zs and drop check passes.');
+    lines.push(
+      'With the proposal in full, every capacity, overload, cpc, Zs, drop and motor-starting check passes.',
+    );
   else
     lines.push(
       `Even in full, ${r.failing.length} check${r.failing.length === 1 ? '' : 's'} would still fail (${r.failing
         .slice(0, 6)
         .map((f) => `${f.id} ${f.key}`)
         .join(', ')}${r.failing.length > 6 ? ', …' : ''}); sizes alone cannot fix them.`,
+    );
+  if (r.newBreakingFailures.length > 0)
+    lines.push(
+      `Larger cables raise the fault level: the device on ${r.newBreakingFailures.join(', ')} would then fall short of its breaking capacity; choose a device with a higher breaking capacity there.`,
     );
   if (r.changes.length === 0) lines.push('No size needs to change.');
   return lines;
