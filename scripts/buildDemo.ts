@@ -37,7 +37,8 @@ doc.details = {
 
 const supply = doc.nodes[0]!;
 supply.name = 'Supply 100 A TP&N';
-supply.position = { x: 0, y: 0 };
+// Centred over the main board (positions are top-left corners: supply 72 px wide, board 176 px).
+supply.position = { x: 52, y: 0 };
 // Declared by the (invented) supply company for this rural pole-mounted transformer.
 if (supply.kind === 'supply') supply.pfcKa = 10;
 
