@@ -8,55 +8,17 @@
  */
 import { spawn, spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type Page } from 'playwright-core';
 import { randomNetwork } from './randomNetwork.ts';
+import { CHROMIUM, CHROMIUM_ARGS as ARGS, freePort, waitFor } from '../tests/e2e/host.ts';
 import { tidyPositions } from '../src/model/layout.ts';
 import { serializeDocument } from '../src/model/serializeDocument.ts';
 
 const ELEMENTS = 1000;
 const FRAMES = 60;
 const ROUNDS = 3;
-const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
-const ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--disable-dev-shm-usage',
-];
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const a = srv.address();
-      const port = typeof a === 'object' && a ? a.port : 0;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
-
-async function waitFor(url: string, ms: number): Promise<void> {
-  const end = Date.now() + ms;
-  while (Date.now() < end) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`preview server did not answer at ${url}`);
-}
-
 function quantile(xs: number[], q: number): number {
   const s = [...xs].sort((a, b) => a - b);
   return s[Math.min(s.length - 1, Math.floor(q * (s.length - 1) + 0.5))] ?? NaN;

@@ -2,21 +2,9 @@ import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { CHROMIUM, CHROMIUM_ARGS as ARGS } from './host.ts';
 
 export const ARTIFACTS = join(process.cwd(), 'test-artifacts');
-
-const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
-const ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--disable-dev-shm-usage',
-];
 
 export interface Session {
   context: BrowserContext;

@@ -1,37 +1,11 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { createServer } from 'node:net';
+import { freePort, waitFor } from './host.ts';
 import type { TestProject } from 'vitest/node';
 
 declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
   }
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const addr = srv.address();
-      const port = typeof addr === 'object' && addr ? addr.port : 0;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
-
-async function waitFor(url: string, ms: number): Promise<void> {
-  const end = Date.now() + ms;
-  while (Date.now() < end) {
-    try {
-      const res = await fetch(url);
-      if (res.ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`preview server did not answer at ${url} within ${ms} ms`);
 }
 
 let server: ChildProcess | undefined;
@@ -53,7 +27,7 @@ export default async function setup(project: TestProject) {
     { stdio: 'ignore' },
   );
   const baseUrl = `http://127.0.0.1:${port}/`;
-  await waitFor(baseUrl, 30000);
+  await waitFor(baseUrl, 60000);
   project.provide('baseUrl', baseUrl);
   return () => {
     server?.kill();
