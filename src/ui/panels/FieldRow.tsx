@@ -69,8 +69,10 @@ function TypedField<E, P>({
   // The draft lives only while the user is editing or while it is invalid.
   const [draft, setDraft] = useState<string | null>(null);
   const [reason, setReason] = useState<string | null>(null);
-  const shown = draft ?? stored;
+  const unset = spec.kind === 'number' && spec.unsetPrompt !== undefined && spec.get(element) === 0;
+  const shown = draft ?? (unset ? '' : stored);
   const unit = spec.kind === 'number' ? spec.unit : '';
+  const hint = unset && spec.kind === 'number' ? spec.unsetPrompt : spec.hint;
 
   const parse = (text: string): Parsed<number | string> =>
     spec.kind === 'number'
@@ -119,6 +121,7 @@ function TypedField<E, P>({
           type="text"
           inputMode={spec.kind === 'number' ? 'decimal' : undefined}
           value={shown}
+          placeholder={unset ? 'not set' : undefined}
           aria-invalid={reason ? true : undefined}
           aria-describedby={reason ? reasonId : undefined}
           data-field={spec.key}
@@ -136,7 +139,7 @@ function TypedField<E, P>({
           {reason}
         </div>
       ) : (
-        spec.hint && <div className="dl-hint">{spec.hint}</div>
+        hint && <div className={unset ? 'dl-hint dl-hint-unset' : 'dl-hint'}>{hint}</div>
       )}
     </div>
   );

@@ -91,6 +91,8 @@ export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
         label: 'Route length (one way)',
         unit: 'm',
         rule: { min: 0, minExclusive: true, max: 10000 },
+        unsetPrompt:
+          'Not set yet: enter the route length, measured or taken off the drawings; nothing on this path can be solved without it.',
         get: (c) => c.lengthM,
         set: (_c, lengthM) => ({ lengthM }),
       },

@@ -25,6 +25,8 @@ export interface NumberField<E, P> extends Base<E> {
   kind: 'number';
   unit: string;
   rule: NumberRule;
+  /** Where 0 means "not entered yet" (a new cable's length): shown empty, with this prompt. */
+  unsetPrompt?: string;
   get: (el: E) => number | undefined;
   set: (el: E, value: number) => P;
 }

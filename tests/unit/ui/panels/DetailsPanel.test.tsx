@@ -141,4 +141,19 @@ describe('details panel', () => {
       `${fmt(balance.imbalancePct, 0)} % (heaviest ${balance.worstPhase})`,
     );
   });
+
+  test('a cable whose length is not set yet shows an empty field that asks for it', () => {
+    const doc = smallNetwork();
+    doc.cables[1]!.lengthM = 0;
+    loadIntoStore(doc, [doc.cables[1]!.id]);
+    render(<DetailsPanel />);
+    const input = lengthInput();
+    expect(input.value).toBe('');
+    expect(input.placeholder).toBe('not set');
+    expect(screen.getByTestId('details-panel').textContent).toMatch(/Not set yet: enter the route length/);
+    fireEvent.change(input, { target: { value: '12' } });
+    fireEvent.keyDown(input, { key: 'Enter' });
+    expect(editorStore.getState().doc.cables[1]!.lengthM).toBe(12);
+    expect(lengthInput().value).toBe('12');
+  });
 });
