@@ -69,9 +69,8 @@ export interface DropState {
   /** Valid one-way length, 0 where invalid. */
   cableLengthM: Float64Array;
 
-  /** Load current of a valid load, A per phase conductor, and its lag angle. */
+  /** Load current of a valid load, A per phase conductor. */
   loadCurrentA: Float64Array;
-  loadPhiRad: Float64Array;
   loadValid: Uint8Array;
   /** Phases a load draws from (7 for a three-phase load), 0 for non-loads. */
   loadMask: Uint8Array;
@@ -86,9 +85,6 @@ export interface DropState {
   /** Neutral (return) current phasor on each cable. */
   nRe: Float64Array;
   nIm: Float64Array;
-  /** Phasor drop on each cable, per phase (phase conductor plus the neutral's share), V. */
-  dvRe: Float64Array;
-  dvIm: Float64Array;
   /** The drop projected on the phase's nominal direction (r cos φ + x sin φ form), V, per phase. */
   dropProj: Float64Array;
   /** Cumulative projected drop from the origin at each node, V, per phase. */
@@ -98,8 +94,11 @@ export interface DropState {
   vIm: Float64Array;
   /** Route length from the origin, m. */
   pathLengthM: Float64Array;
-  /** Cumulative drop at the last board upstream of each node (NEC branch budget), V, per phase. */
-  branchBase: Float64Array;
+  /**
+   * The last board upstream of each node, or the origin where there is none: the branch budget
+   * (NEC) counts from its cumulative drop.
+   */
+  branchAt: Int32Array;
 
   /** Per load: worst relevant phase, cumulative % of U0, limit %, budget used; status -1 none, 0..2. */
   worstPhase: Int8Array;
@@ -125,14 +124,15 @@ export interface DropState {
   loadDeclared: Uint8Array;
   /** 0 lighting, 1 other, 2 neither (judged as lighting, with a finding). */
   loadCategory: Uint8Array;
+  /** 1 where a load has motor starting data (read here so protection need not read the loads again). */
+  loadMotor: Uint8Array;
   /** A cable's `phases` field: 1, 3, or 0 for anything else. */
   cablePhasesField: Uint8Array;
   /** Scratch for the passes: phases needed below a node, 1 where a three-phase load or cable is below. */
   needBelow: Uint8Array;
   threeBelow: Uint8Array;
-  /** Scratch for the judge: smallest slack below a node per phase, % of U0 (total and branch). */
+  /** Scratch for the judge: smallest slack below a node per phase, % of U0. */
   slackPct: Float64Array;
-  slackBranchPct: Float64Array;
   /**
    * The reached nodes in the order the numeric passes walk them (`orderLength` long, parents
    * first): document order when every tree cable runs from a lower to a higher position and each
@@ -201,7 +201,6 @@ function layout(a: Slab, n: number, m: number) {
     cableZx: a.f64(m),
     cableLengthM: a.f64(m),
     loadCurrentA: a.f64(n),
-    loadPhiRad: a.f64(n),
     loadValid: a.u8(n),
     loadMask: a.u8(n),
     diversity: a.f64(n).fill(1),
@@ -210,14 +209,12 @@ function layout(a: Slab, n: number, m: number) {
     dropIScale: a.f64(m).fill(1),
     nRe: a.f64(m),
     nIm: a.f64(m),
-    dvRe: a.f64(m * 3),
-    dvIm: a.f64(m * 3),
     dropProj: a.f64(m * 3),
     cum: a.f64(n * 3),
     vRe: a.f64(n * 3),
     vIm: a.f64(n * 3),
     pathLengthM: a.f64(n),
-    branchBase: a.f64(n * 3),
+    branchAt: a.i32(n),
     worstPhase: a.i8(n).fill(-1),
     loadCumPct: a.f64(n),
     loadLimitPct: a.f64(n),
@@ -233,11 +230,11 @@ function layout(a: Slab, n: number, m: number) {
     loadDf: a.f64(n),
     loadDeclared: a.u8(n),
     loadCategory: a.u8(n),
+    loadMotor: a.u8(n),
     cablePhasesField: a.u8(m),
     needBelow: a.u8(n),
     threeBelow: a.u8(n),
     slackPct: a.f64(n * 3),
-    slackBranchPct: a.f64(n * 3),
     walk: a.i32(n),
     rank: a.i32(n),
     childStart: a.i32(n + 1),

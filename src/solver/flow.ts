@@ -86,8 +86,11 @@ export function cableIbA(s: DropState, j: number): number {
   return ib;
 }
 
-/** Drop of the cable `j` feeding node `v`, per phase carried. */
-function segmentDrop(s: DropState, v: number, j: number): void {
+/**
+ * Drop of the cable `j` feeding node `v` from `u`, per phase carried; the voltage phasor at `v` is
+ * the one at `u` minus it (the caller has copied `u`'s, which phases not carried keep).
+ */
+function segmentDrop(s: DropState, v: number, j: number, u: number): void {
   const { iRe, iIm } = s;
   const mask = s.cablePhases[j] as number;
   const b = v * 3;
@@ -138,16 +141,27 @@ function segmentDrop(s: DropState, v: number, j: number): void {
   const zr = s.cableZr[j] as number;
   const zx = s.cableZx[j] as number;
   const cb = j * 3;
-  if (mask & 1) drop(s, cb, 0, zr, zx, jr0 + nr, ji0 + ni);
-  if (mask & 2) drop(s, cb, 1, zr, zx, jr1 + nr, ji1 + ni);
-  if (mask & 4) drop(s, cb, 2, zr, zx, jr2 + nr, ji2 + ni);
+  const ub = u * 3;
+  if (mask & 1) drop(s, cb, b, ub, 0, zr, zx, jr0 + nr, ji0 + ni);
+  if (mask & 2) drop(s, cb, b, ub, 1, zr, zx, jr1 + nr, ji1 + ni);
+  if (mask & 4) drop(s, cb, b, ub, 2, zr, zx, jr2 + nr, ji2 + ni);
 }
 
-function drop(s: DropState, cb: number, p: number, zr: number, zx: number, jr: number, ji: number): void {
+function drop(
+  s: DropState,
+  cb: number,
+  b: number,
+  ub: number,
+  p: number,
+  zr: number,
+  zx: number,
+  jr: number,
+  ji: number,
+): void {
   const re = zr * jr - zx * ji;
   const im = zr * ji + zx * jr;
-  s.dvRe[cb + p] = re;
-  s.dvIm[cb + p] = im;
+  s.vRe[b + p] = (s.vRe[ub + p] as number) - re;
+  s.vIm[b + p] = (s.vIm[ub + p] as number) - im;
   s.dropProj[cb + p] = re * (PHASE_COS[p] as number) + im * (PHASE_SIN[p] as number);
 }
 
@@ -156,10 +170,12 @@ function drop(s: DropState, cb: number, p: number, zr: number, zx: number, jr: n
  * cumulative drop, voltage, route length and branch base at every node.
  */
 export function accumulate(s: DropState): void {
-  const { cum, vRe, vIm, dvRe, dvIm, dropProj, branchBase, walk, parentCable, cableFrom } = s;
+  const { cum, vRe, vIm, dropProj, branchAt, walk, parentCable, cableFrom } = s;
   const { nodeKind, cableBad, incomplete, pathLengthM, cableLengthM } = s;
   if (s.root < 0) return;
   s.nodePhases[s.root] = supplyMask(s);
+  // The branch budget counts from the last board upstream, or from the origin (cumulative 0).
+  branchAt[s.root] = s.root;
   const rb = s.root * 3;
   for (let p = 0; p < 3; p++) {
     vRe[rb + p] = s.u0V * (PHASE_COS[p] as number);
@@ -176,28 +192,21 @@ export function accumulate(s: DropState): void {
     const ub = u * 3;
     const cb = j * 3;
     const bad = cableBad[j] as number;
-    if (!bad) segmentDrop(s, v, j);
+    // A phase the segment does not carry (or a segment not solved) drops nothing.
+    vRe[b] = vRe[ub] as number;
+    vRe[b + 1] = vRe[ub + 1] as number;
+    vRe[b + 2] = vRe[ub + 2] as number;
+    vIm[b] = vIm[ub] as number;
+    vIm[b + 1] = vIm[ub + 1] as number;
+    vIm[b + 2] = vIm[ub + 2] as number;
+    if (!bad) segmentDrop(s, v, j, u);
     const c0 = (cum[ub] as number) + (dropProj[cb] as number);
     const c1 = (cum[ub + 1] as number) + (dropProj[cb + 1] as number);
     const c2 = (cum[ub + 2] as number) + (dropProj[cb + 2] as number);
     cum[b] = c0;
     cum[b + 1] = c1;
     cum[b + 2] = c2;
-    vRe[b] = (vRe[ub] as number) - (dvRe[cb] as number);
-    vRe[b + 1] = (vRe[ub + 1] as number) - (dvRe[cb + 1] as number);
-    vRe[b + 2] = (vRe[ub + 2] as number) - (dvRe[cb + 2] as number);
-    vIm[b] = (vIm[ub] as number) - (dvIm[cb] as number);
-    vIm[b + 1] = (vIm[ub + 1] as number) - (dvIm[cb + 1] as number);
-    vIm[b + 2] = (vIm[ub + 2] as number) - (dvIm[cb + 2] as number);
-    if (nodeKind[v] === KIND_BOARD) {
-      branchBase[b] = c0;
-      branchBase[b + 1] = c1;
-      branchBase[b + 2] = c2;
-    } else {
-      branchBase[b] = branchBase[ub] as number;
-      branchBase[b + 1] = branchBase[ub + 1] as number;
-      branchBase[b + 2] = branchBase[ub + 2] as number;
-    }
+    branchAt[v] = nodeKind[v] === KIND_BOARD ? v : (branchAt[u] as number);
     incomplete[v] = (incomplete[u] as number) | bad;
     pathLengthM[v] = (pathLengthM[u] as number) + (cableLengthM[j] as number);
   }

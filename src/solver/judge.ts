@@ -23,9 +23,10 @@ export function judgeLoads(s: DropState): void {
   const pctPerV = 100 / s.u0V;
   const branchLimit = profile.branchPct;
   const slack = s.slackPct.fill(Infinity);
-  const slackB = branchLimit === undefined ? undefined : s.slackBranchPct.fill(Infinity);
+  // Only a profile with a branch limit needs the branch slack (a scratch array of its own).
+  const slackB = branchLimit === undefined ? undefined : new Float64Array(s.nodeCount * 3).fill(Infinity);
   const close = s.closeThreshold;
-  const { walk, nodeKind, cum, branchBase, parentCable, cableFrom, status, loadCategory } = s;
+  const { walk, nodeKind, cum, branchAt, parentCable, cableFrom, status, loadCategory } = s;
   const root = s.root;
   const tail = new FindingTail(findings);
 
@@ -33,6 +34,8 @@ export function judgeLoads(s: DropState): void {
     const v = walk[k] as number;
     const b = v * 3;
     if (nodeKind[v] === KIND_LOAD) {
+      // Cumulative drop at the last board upstream (0 at the origin), per phase.
+      const bb = (branchAt[v] as number) * 3;
       const mask = loadPhaseMask(s, v);
       let worst = -1;
       let worstPct = -Infinity;
@@ -44,7 +47,7 @@ export function judgeLoads(s: DropState): void {
           worstPct = pct;
           worst = p;
         }
-        const br = ((cum[b + p] as number) - (branchBase[b + p] as number)) * pctPerV;
+        const br = ((cum[b + p] as number) - (cum[bb + p] as number)) * pctPerV;
         if (br > branchWorst) branchWorst = br;
       }
       const categoryCode = loadCategory[v];
@@ -78,7 +81,7 @@ export function judgeLoads(s: DropState): void {
           const pct = (cum[b + p] as number) * pctPerV;
           slack[b + p] = limit - pct;
           if (slackB && branchLimit !== undefined)
-            slackB[b + p] = branchLimit - ((cum[b + p] as number) - (branchBase[b + p] as number)) * pctPerV;
+            slackB[b + p] = branchLimit - ((cum[b + p] as number) - (cum[bb + p] as number)) * pctPerV;
         }
         if (code === 2)
           findings.push({

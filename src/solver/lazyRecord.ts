@@ -11,7 +11,8 @@ export function lazyRecord<T extends object>(
   include: (i: number) => boolean,
   make: (i: number) => T,
 ): Record<string, T> {
-  const built: (T | undefined)[] = new Array(ids.length);
+  // Made on the first read: a solve whose results nobody reads allocates nothing per element here.
+  let built: (T | undefined)[] | undefined;
   const overrides = new Map<string, T | undefined>();
   let keys: string[] | undefined;
 
@@ -20,6 +21,7 @@ export function lazyRecord<T extends object>(
     if (overrides.has(key)) return overrides.get(key);
     const i = index.get(key);
     if (i === undefined || ids[i] !== key || !include(i)) return undefined;
+    built ??= new Array<T | undefined>(ids.length);
     let value = built[i];
     if (value === undefined) {
       value = make(i);

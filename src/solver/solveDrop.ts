@@ -156,8 +156,10 @@ function readVoltages(s: DropState, settings: Loose): void {
 
 function buildResults(s: DropState): Results {
   // A load's entry in `nodes` and in `loads` is the same object.
-  const nodeViews: (NodeResult | undefined)[] = new Array(s.nodeCount);
+  // Made on the first read, like the records' own memory.
+  let nodeViews: (NodeResult | undefined)[] | undefined;
   const nodeView = (i: number): NodeResult => {
+    nodeViews ??= new Array<NodeResult | undefined>(s.nodeCount);
     let r = nodeViews[i];
     if (!r) {
       r = s.nodeKind[i] === KIND_LOAD ? new LoadResultView(s, i) : new NodeResultView(s, i);

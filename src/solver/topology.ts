@@ -114,6 +114,8 @@ export function buildTopology(s: DropState): void {
   const rows = new RowMemo(s.catalogue);
   // childStart[from + 1] counts children first, then becomes the start of each list.
   const start = s.childStart;
+  let lastTo = -1;
+  let lastFrom = -1;
   for (let j = 0; j < m; j++) {
     const c: unknown = cables[j];
     const id = typeof c === 'object' && c !== null && !Array.isArray(c) ? (c as Loose).id : undefined;
@@ -137,8 +139,19 @@ export function buildTopology(s: DropState): void {
     const cable = c as Loose;
     const fromId = cable.from;
     const toId = cable.to;
-    const from = nodeIndex.get(fromId);
-    const to = nodeIndex.get(toId);
+    // Cables mostly follow the node list: try the node after the last one fed, and the last
+    // sending end (siblings) or the last node fed (a chain), before the index. A node holds its
+    // id in nodeIds only when it is the id's first holder, which is what the index answers.
+    const nextTo = lastTo + 1;
+    const to = nextTo < n && nodeIds[nextTo] === toId && toId !== '' ? nextTo : nodeIndex.get(toId);
+    const from =
+      lastFrom >= 0 && nodeIds[lastFrom] === fromId
+        ? lastFrom
+        : lastTo >= 0 && nodeIds[lastTo] === fromId
+          ? lastTo
+          : nodeIndex.get(fromId);
+    if (to !== undefined) lastTo = to;
+    if (from !== undefined) lastFrom = from;
     const problem = cableProblem(s, id, cable, from, to);
     if (problem) {
       findings.push(problem);

@@ -140,7 +140,6 @@ export function setLoadCurrent(s: DropState, i: number, mask: number): void {
   const current = amps * (s.loadDf[i] as number);
   const phi = Math.acos(cosPhi);
   s.loadCurrentA[i] = current;
-  s.loadPhiRad[i] = phi;
   s.loadValid[i] = 1;
   const b = i * 3;
   for (let p = 0; p < 3; p++) {
