@@ -25,11 +25,13 @@ export class CapacityMemo {
   /** Installation conditions by content (method, ambient, grouping, arrangement, Ci) to cable types. */
   readonly #byInstallation = new Map<
     string,
-    Map<number, Map<number, Map<string, Map<number, Map<number, Figures>>>>>
+    Map<number, Map<number, Map<string, Map<number, Map<number, number>>>>>
   >();
   /** The last conditions met and their entry: most cables of a design share them. */
   #lastInst: Installation | undefined;
-  #lastByKey: Map<number, Figures> | undefined;
+  #lastByKey: Map<number, number> | undefined;
+  /** Every set of figures worked out, each once; `figuresAt` answers with a position here. */
+  readonly list: Figures[] = [];
   /** Sizes met so far, their position the size's id (a few standard sizes: a scan beats hashing a double). */
   readonly #sizes: number[] = [];
   readonly #k: number[] = [];
@@ -39,7 +41,7 @@ export class CapacityMemo {
   }
 
   /** The memory for one set of installation conditions, found by content (capacityFigures reads only these fields). */
-  #forInstallation(inst: Installation): Map<number, Figures> {
+  #forInstallation(inst: Installation): Map<number, number> {
     const last = this.#lastInst;
     if (
       last !== undefined &&
@@ -66,8 +68,14 @@ export class CapacityMemo {
     return byKey;
   }
 
-  /** capacityFigures(cable, tables), remembered by installation conditions and cable type. */
-  figures(cable: Cable): Figures {
+  /** capacityFigures(cable, tables) as a new entry of `list`, where it stays. */
+  #add(cable: Cable): number {
+    this.list.push(capacityFigures(cable, this.#tables));
+    return this.list.length - 1;
+  }
+
+  /** Position in `list` of capacityFigures(cable, tables), remembered by installation conditions and cable type. */
+  figuresAt(cable: Cable): number {
     const mat = MATERIAL[cable.material];
     const ins = INSULATION[cable.insulation];
     const con = CONSTRUCTION[cable.construction];
@@ -82,14 +90,14 @@ export class CapacityMemo {
       typeof cable.sizeMm2 !== 'number' ||
       Number.isNaN(cable.sizeMm2)
     )
-      return capacityFigures(cable, this.#tables);
+      return this.#add(cable);
     const size = cable.sizeMm2;
     const sizes = this.#sizes;
     let sizeId = 0;
     while (sizeId < sizes.length && sizes[sizeId] !== size) sizeId++;
     if (sizeId === sizes.length) {
       // Past the standard sizes the scan would grow with the document: work those out each time.
-      if (sizes.length >= 64) return capacityFigures(cable, this.#tables);
+      if (sizes.length >= 64) return this.#add(cable);
       sizes.push(size);
     }
     const key =
@@ -102,14 +110,14 @@ export class CapacityMemo {
       typeof inst.groupedCircuits !== 'number' ||
       typeof inst.insulationFactor !== 'number'
     )
-      return capacityFigures(cable, this.#tables);
+      return this.#add(cable);
     const byKey = this.#forInstallation(inst);
-    let f = byKey.get(key);
-    if (!f) {
-      f = capacityFigures(cable, this.#tables);
-      byKey.set(key, f);
+    let at = byKey.get(key);
+    if (at === undefined) {
+      at = this.#add(cable);
+      byKey.set(key, at);
     }
-    return f;
+    return at;
   }
 
   /** cpcK(cpc, insulation).k, remembered by kind, material, insulation and whether above 300 mm². */

@@ -1,10 +1,12 @@
 /**
  * The protection pass's working memory: per node the accumulated loop impedances (R and X apart),
- * per cable R1 + R2, capacity and the device that protects it, as flat typed arrays.
+ * per cable R1 + R2, capacity and the device that protects it, as flat typed arrays. Only what the
+ * protection results read is kept per element; the pass works out everything else as it goes.
  */
 import type { NodeElement, Supply } from '../../model/types.ts';
 import type { FaultLevel } from './protectionResults.ts';
 import { C_MAX, type SourceImpedance } from './impedance.ts';
+import type { CapacityFigures } from './capacity.ts';
 import { hypot } from '../hypot.ts';
 
 export class PassArrays {
@@ -24,23 +26,12 @@ export class PassArrays {
   /** 1 where every segment from the origin is three-phase. */
   readonly three: Uint8Array;
   readonly zsMax: Float64Array;
-  /** |Zs| (hot) at the node, and at the far end of each cable with a result: taken as the walk sets the loop. */
-  readonly zsNode: Float64Array;
-  readonly zsCable: Float64Array;
   readonly zsMaxKnown: Uint8Array;
+  /** Scratch: the fault level at a node as a sending end, kA, worked out once (NaN until then). */
+  readonly sendingKa: Float64Array;
 
   /** 1 where the cable gets a protection result, 2 where it is reached but has no resistance data. */
   readonly hasCable: Uint8Array;
-  /** Per cable, read in document order: own device, resistances known, three-phase. */
-  readonly ownDevice: Uint8Array;
-  readonly noResistance: Uint8Array;
-  readonly cableThree: Uint8Array;
-  readonly r1Cold: Float64Array;
-  /** Reactance of the segment, one conductor, parallel cables combined, ohms. */
-  readonly xLen: Float64Array;
-  readonly cpcMm2: Float64Array;
-  readonly cpcK: Float64Array;
-  readonly byTable: Uint8Array;
   /** The cable whose device protects this one, -1 where none. */
   readonly protBy: Int32Array;
   /** 1 distribution circuit, 0 final circuit. */
@@ -48,18 +39,16 @@ export class PassArrays {
   readonly requiredS: Float64Array;
   readonly r1r2Hot: Float64Array;
   readonly r1r2Cold: Float64Array;
-  readonly capOk: Uint8Array;
-  readonly itA: Float64Array;
-  readonly izA: Float64Array;
-  readonly ca: Float64Array;
-  readonly cg: Float64Array;
-  readonly ci: Float64Array;
+  /** Position in `capacity` of the cable's capacity figures (or the reason there are none). */
+  readonly capAt: Int32Array;
+  /** Capacity figures met in this solve (shared by the cables with the same type and conditions). */
+  capacity: readonly (CapacityFigures | { error: string })[] = [];
 
   constructor(n: number, m: number) {
-    // One buffer for every array: one allocation per solve, not twenty-five.
-    const f64 = 9 * n + 13 * m;
-    const i32 = m;
-    const u8 = 4 * n + 7 * m;
+    // One buffer for every array: one allocation per solve, not twenty.
+    const f64 = 10 * n + 3 * m;
+    const i32 = 2 * m;
+    const u8 = 4 * n + 2 * m;
     const buffer = new ArrayBuffer(f64 * 8 + i32 * 4 + u8);
     let at = 0;
     const f = (len: number) => {
@@ -85,32 +74,18 @@ export class PassArrays {
     this.fpR = f(n);
     this.fpX = f(n);
     this.zsMax = f(n);
-    this.zsNode = f(n);
-    this.zsCable = f(m);
+    this.sendingKa = f(n).fill(NaN);
     this.requiredS = f(m);
     this.r1r2Hot = f(m);
     this.r1r2Cold = f(m);
-    this.itA = f(m);
-    this.izA = f(m);
-    this.ca = f(m);
-    this.cg = f(m);
-    this.ci = f(m);
-    this.r1Cold = f(m);
-    this.xLen = f(m);
-    this.cpcMm2 = f(m);
-    this.cpcK = f(m);
     this.protBy = i(m).fill(-1);
+    this.capAt = i(m).fill(-1);
     this.acc = u(n);
     this.hasNode = u(n);
     this.three = u(n);
     this.zsMaxKnown = u(n);
     this.hasCable = u(m);
     this.circuit = u(m);
-    this.capOk = u(m);
-    this.ownDevice = u(m);
-    this.noResistance = u(m);
-    this.cableThree = u(m);
-    this.byTable = u(m);
   }
 
   /** The origin: Ze for the earth loop, the source impedance for fault level. */

@@ -1,12 +1,14 @@
 /**
- * Sweep 3 of the protection pass: every check decided from the arrays, in document order. A check
- * that fails or cannot be assessed becomes a finding with the message the check object would carry
- * (the same message functions); passing checks cost no string. Findings are then put in walk
- * order (each cable's, then its far node's), the order the checks are listed in.
+ * The checks of one segment and of its far node, decided from the pass arrays as the walk reaches
+ * them (protectionPass.ts). A check that fails or cannot be assessed becomes a finding with the
+ * message the check object would carry (the same message functions); passing checks cost no
+ * string, and the node is read only to name it in a message. Findings are then put in
+ * breadth-first order (each cable's, then its far node's), the order the checks are listed in.
  */
-import type { Cable, Device, Load, NodeElement } from '../../model/types.ts';
+import type { Cable, Device, Load } from '../../model/types.ts';
 import type { Finding } from '../results.ts';
 import { CMIN, conventionalOperatingMultiple, settingA, type FuseDataSet } from '../../catalogue/devices.ts';
+import { tableMinimumCpcMm2 } from '../../catalogue/kValues.ts';
 import type { Check, CheckKey, MotorStartResult } from './protectionResults.ts';
 import type { Topology } from './topology.ts';
 import * as msg from './cableChecks.ts';
@@ -20,8 +22,10 @@ import {
 } from './disconnection.ts';
 import { FAIL_CODES } from './protectionWorking.ts';
 import type { CapacityMemo } from './capacityMemo.ts';
-import type { TreeInputs } from './treeInputs.ts';
+import { KIND_LOAD, type TreeInputs } from './treeInputs.ts';
+import { cableIbA } from '../flow.ts';
 import { motorStartFor } from '../motorStart.ts';
+import { hypot } from '../hypot.ts';
 import { faultMaxA, nodeName, type PassArrays } from './passArrays.ts';
 import type { PassContext } from './protectionPass.ts';
 
@@ -44,10 +48,15 @@ function motorTopology(t: TreeInputs): Topology {
   };
 }
 
-/** Findings with the walk position they belong at: 2 x rank for a cable's, 2 x rank + 1 for its node's. */
-class Tagged {
+/**
+ * Findings with the breadth-first position they belong at (2 x rank for a cable's, 2 x rank + 1
+ * for its far node's), the counts, and the motor starting results met on the way.
+ */
+export class Tagged {
   readonly list: Finding[] = [];
   readonly tags: number[] = [];
+  readonly motors = new Map<number, { result: MotorStartResult; check: Check }>();
+  topology: Topology | undefined;
   failed = 0;
   unassessed = 0;
   fail(tag: number, key: CheckKey, elementId: string, message: string): void {
@@ -61,6 +70,15 @@ class Tagged {
   push(tag: number, f: Finding): void {
     this.list.push(f);
     this.tags.push(tag);
+  }
+  /** A reached segment whose conductor or cpc IEC 60228 does not list: no figures, one warning. */
+  noResistance(t: TreeInputs, j: number, cable: Cable): void {
+    this.push(2 * t.rank[t.cableTo[j]!]!, {
+      code: 'noResistance',
+      severity: 'warning',
+      elementId: cable.id,
+      message: `cable ${cable.name}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
+    });
   }
   /** A stable counting sort by tag onto `out`. */
   appendSorted(out: Finding[], tagCount: number): void {
@@ -80,166 +98,144 @@ function deviceOf(cables: readonly Cable[], a: PassArrays, j: number): Device | 
   return by >= 0 ? (cables[by]!.device ?? null) : null;
 }
 
-/** Cable checks: Ib <= In, In <= Iz, I2 <= 1.45 Iz, breaking capacity, cpc (as cableChecks decides them). */
-function cableChecks(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagged): void {
-  const { t, u0V, fuses, supply } = ctx;
-  const { cables, cableFrom, cableTo, rank } = t;
-  // The fault level at a sending end, worked out once per node (NaN until then): siblings share it.
-  const sendingKa = new Float64Array(t.nodes.length).fill(NaN);
-  for (let j = 0; j < cables.length; j++) {
-    const state = a.hasCable[j];
-    if (!state) continue;
-    const tag = 2 * rank[cableTo[j]!]!;
-    const cable = cables[j]!;
-    const id = cable.id;
-    if (state === 2) {
-      out.push(tag, {
-        code: 'noResistance',
-        severity: 'warning',
-        elementId: id,
-        message: `cable ${cable.name}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
-      });
-      continue;
-    }
-    const device = deviceOf(cables, a, j);
-    const inA = device ? settingA(device) : null;
-    if (device && inA !== null) {
-      a.requiredS[j] = requiredDisconnectionS(
-        supply.earthing,
-        a.circuit[j] ? 'distribution' : 'final',
-        inA,
-        u0V,
-      );
-    }
-    const ibA = t.ibA(j);
-    if (device && inA !== null && !(ibA <= inA))
-      out.fail(tag, 'ibIn', id, msg.ibInFailMessage(`cable ${cable.name}`, ibA, inA));
-    if (!a.capOk[j]) {
-      const cap = memo.figures(cable);
-      out.unknown(tag, id, msg.capacityErrorMessage(`cable ${cable.name}`, 'error' in cap ? cap.error : ''));
-    } else {
-      const izA = a.izA[j]!;
-      const base = inA ?? ibA;
-      if (!(base <= izA))
-        out.fail(
-          tag,
-          'inIz',
-          id,
-          msg.inIzFailMessage(`cable ${cable.name}`, inA === null ? 'Ib' : 'In', base, izA),
-        );
-      if (device && inA !== null) {
-        const i2 = conventionalOperatingMultiple(device.type, inA) * inA;
-        const lim = 1.45 * izA;
-        if (!(i2 <= lim)) out.fail(tag, 'i2', id, msg.i2FailMessage(`cable ${cable.name}`, i2, lim));
-      }
-    }
-    const own = cable.device;
-    if (own) {
-      const u = cableFrom[j]!;
-      let kA = sendingKa[u]!;
-      if (kA !== kA) {
-        kA = faultMaxA(a, u, u0V) / 1000;
-        sendingKa[u] = kA;
-      }
-      if (!(own.breakingKa >= kA))
-        out.fail(
-          tag,
-          'breaking',
-          id,
-          msg.breakingFailMessage(cable.name, kA, msg.sendingEnd(cable.name), own.breakingKa),
-        );
-    }
-    // Adiabatic check on the cpc at the far end's earth fault current.
-    const earthFaultA = (CMIN * u0V) / a.zsCable[j]!;
-    const byTable = a.byTable[j] === 1;
-    const tS = device ? operatingTimeS(device, earthFaultA, fuses) : null;
-    if (tS === null) {
-      if (!byTable)
-        out.unknown(
-          tag,
-          id,
-          msg.cpcNotAssessedMessage(cable.name, device ? msg.CPC_WHY_SLOW : msg.CPC_WHY_NO_DEVICE),
-        );
-    } else {
-      const sMin = msg.adiabaticMinimumMm2(earthFaultA, tS, a.cpcK[j]!);
-      const cpcMm2 = a.cpcMm2[j]!;
-      if (!(cpcMm2 >= sMin || byTable))
-        out.fail(tag, 'cpc', id, msg.cpcFailMessage(cable.name, cpcMm2, sMin));
-    }
-  }
-}
-
-/** Node checks: Zs against the device's maximum (zsChecks), TT touch voltage, motor dip. */
-function nodeChecks(
+/**
+ * Segment `j` (from `u` to `v`): Ib <= In, In <= Iz, I2 <= 1.45 Iz, breaking capacity, cpc (as
+ * cableChecks decides them). Sets the required disconnection time its far node's check uses.
+ */
+export function cableFindings(
   ctx: PassContext,
   a: PassArrays,
-  motors: Map<number, { result: MotorStartResult; check: Check }>,
+  memo: CapacityMemo,
   out: Tagged,
+  j: number,
+  v: number,
+  u: number,
+  cable: Cable,
 ): void {
   const { t, u0V, fuses, supply } = ctx;
-  const { nodes, cables, feeding, rank } = t;
-  const tt = supply.earthing === 'TT';
-  let topo: Topology | undefined;
-  for (let v = 0; v < nodes.length; v++) {
-    if (!a.hasNode[v] || v === t.root) continue;
-    const j = feeding[v]!;
-    const tag = 2 * rank[v]! + 1;
-    const node: NodeElement = nodes[v]!;
-    const nid = node.id;
-    const zsOhm = a.zsNode[v]!;
-    const device = deviceOf(cables, a, j);
-    if (!device) out.unknown(tag, nid, zsMsg.zsNoDeviceMessage(nodeName(node, nid)));
-    else {
-      const requiredS = a.requiredS[j]!;
-      const rcd = device.rcd;
-      const rcdLimit = rcd && rcd.idnMa > 0 ? 50 / (rcd.idnMa / 1000) : null;
-      if (iaUnknown(device, requiredS, fuses)) {
-        const pass = rcdLimit !== null ? zsOhm <= rcdLimit : null;
-        if (pass !== true) {
-          const ia = operatingCurrent(device, requiredS, fuses);
-          const text = zsMsg.zsIaErrorMessage(nodeName(node, nid), 'error' in ia ? ia.error : '');
-          if (pass === false) out.fail(tag, 'zs', nid, text);
-          else out.unknown(tag, nid, text);
-        }
-      } else {
-        const zsMax = (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses);
-        a.zsMax[v] = zsMax;
-        a.zsMaxKnown[v] = 1;
-        const ok = zsOhm <= zsMax || (rcdLimit !== null && zsOhm <= rcdLimit);
-        if (!ok) out.fail(tag, 'zs', nid, zsMsg.zsFailMessage(nodeName(node, nid), zsOhm, zsMax, requiredS));
-      }
-      if (tt) {
-        const ra = supply.raOhm;
-        if (!rcd || !(rcd.idnMa > 0)) out.unknown(tag, nid, zsMsg.ttNoRcdMessage(nodeName(node, nid)));
-        else if (ra === undefined) out.unknown(tag, nid, zsMsg.ttNoRaMessage(nodeName(node, nid)));
-        else {
-          const volts = ra * (rcd.idnMa / 1000);
-          if (!(volts <= 50)) out.fail(tag, 'rcdTouch', nid, zsMsg.ttFailMessage(nodeName(node, nid), volts));
-        }
-      }
+  const tag = 2 * t.rank[v]!;
+  const id = cable.id;
+  const device = deviceOf(t.cables, a, j);
+  const inA = device ? settingA(device) : null;
+  if (device && inA !== null) {
+    a.requiredS[j] = requiredDisconnectionS(
+      supply.earthing,
+      a.circuit[j] ? 'distribution' : 'final',
+      inA,
+      u0V,
+    );
+  }
+  const ibA = t.drop ? cableIbA(t.drop, j) : t.ibA(j);
+  if (device && inA !== null && !(ibA <= inA))
+    out.fail(tag, 'ibIn', id, msg.ibInFailMessage(`cable ${cable.name}`, ibA, inA));
+  const cap = memo.list[a.capAt[j]!]!;
+  if ('error' in cap) {
+    out.unknown(tag, id, msg.capacityErrorMessage(`cable ${cable.name}`, cap.error));
+  } else {
+    const izA = cap.izA;
+    const base = inA ?? ibA;
+    if (!(base <= izA))
+      out.fail(
+        tag,
+        'inIz',
+        id,
+        msg.inIzFailMessage(`cable ${cable.name}`, inA === null ? 'Ib' : 'In', base, izA),
+      );
+    if (device && inA !== null) {
+      const i2 = conventionalOperatingMultiple(device.type, inA) * inA;
+      const lim = 1.45 * izA;
+      if (!(i2 <= lim)) out.fail(tag, 'i2', id, msg.i2FailMessage(`cable ${cable.name}`, i2, lim));
     }
-    if (node.kind === 'load' && (node as Load).motor && ctx.results.loads[nid]) {
-      const motor = motorStartFor(node as Load, ctx.results, (topo ??= motorTopology(t)), ctx.source, u0V);
-      if (motor) {
-        motors.set(v, motor);
-        if (motor.check.pass === false) out.fail(tag, 'motorDip', nid, motor.check.message);
-        else if (motor.check.pass === null) out.unknown(tag, nid, motor.check.message);
-      }
+  }
+  const own = cable.device;
+  if (own) {
+    // The fault level at a sending end, worked out once per node: siblings share it.
+    let kA = a.sendingKa[u]!;
+    if (kA !== kA) {
+      kA = faultMaxA(a, u, u0V) / 1000;
+      a.sendingKa[u] = kA;
     }
+    if (!(own.breakingKa >= kA))
+      out.fail(
+        tag,
+        'breaking',
+        id,
+        msg.breakingFailMessage(cable.name, kA, msg.sendingEnd(cable.name), own.breakingKa),
+      );
+  }
+  // Adiabatic check on the cpc at the far end's earth fault current.
+  const cpc = cable.cpc;
+  const byTable =
+    cpc.kind !== 'armour' &&
+    cpc.material === cable.material &&
+    cpc.sizeMm2 >= tableMinimumCpcMm2(cable.sizeMm2);
+  const earthFaultA = (CMIN * u0V) / hypot(a.zhR[v]!, a.zhX[v]!);
+  const tS = device ? operatingTimeS(device, earthFaultA, fuses) : null;
+  if (tS === null) {
+    if (!byTable)
+      out.unknown(
+        tag,
+        id,
+        msg.cpcNotAssessedMessage(cable.name, device ? msg.CPC_WHY_SLOW : msg.CPC_WHY_NO_DEVICE),
+      );
+  } else {
+    const sMin = msg.adiabaticMinimumMm2(earthFaultA, tS, memo.cpcK(cpc, cable.insulation));
+    const cpcMm2 = cpc.sizeMm2 * Math.max(1, cable.parallel);
+    if (!(cpcMm2 >= sMin || byTable)) out.fail(tag, 'cpc', id, msg.cpcFailMessage(cable.name, cpcMm2, sMin));
   }
 }
 
-/** Decides every check and appends the findings in walk order; returns the counts. */
-export function checkFindings(
-  ctx: PassContext,
-  a: PassArrays,
-  motors: Map<number, { result: MotorStartResult; check: Check }>,
-  memo: CapacityMemo,
-  findings: Finding[],
-): { failed: number; unassessed: number } {
-  const out = new Tagged();
-  cableChecks(ctx, a, memo, out);
-  nodeChecks(ctx, a, motors, out);
-  out.appendSorted(findings, 2 * ctx.t.orderEnd + 2);
-  return { failed: out.failed, unassessed: out.unassessed };
+/** Far node `v` of segment `j`: Zs against the device's maximum (zsChecks), TT touch voltage, motor dip. */
+export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: number, v: number): void {
+  const { t, u0V, fuses, supply } = ctx;
+  const tag = 2 * t.rank[v]! + 1;
+  const nid = t.nodeIds[v]!;
+  const zsOhm = hypot(a.zhR[v]!, a.zhX[v]!);
+  const device = deviceOf(t.cables, a, j);
+  if (!device) out.unknown(tag, nid, zsMsg.zsNoDeviceMessage(nodeName(t.nodes[v], nid)));
+  else {
+    const requiredS = a.requiredS[j]!;
+    const rcd = device.rcd;
+    const rcdLimit = rcd && rcd.idnMa > 0 ? 50 / (rcd.idnMa / 1000) : null;
+    if (iaUnknown(device, requiredS, fuses)) {
+      const pass = rcdLimit !== null ? zsOhm <= rcdLimit : null;
+      if (pass !== true) {
+        const ia = operatingCurrent(device, requiredS, fuses);
+        const text = zsMsg.zsIaErrorMessage(nodeName(t.nodes[v], nid), 'error' in ia ? ia.error : '');
+        if (pass === false) out.fail(tag, 'zs', nid, text);
+        else out.unknown(tag, nid, text);
+      }
+    } else {
+      const zsMax = (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses);
+      a.zsMax[v] = zsMax;
+      a.zsMaxKnown[v] = 1;
+      const ok = zsOhm <= zsMax || (rcdLimit !== null && zsOhm <= rcdLimit);
+      if (!ok)
+        out.fail(tag, 'zs', nid, zsMsg.zsFailMessage(nodeName(t.nodes[v], nid), zsOhm, zsMax, requiredS));
+    }
+    if (supply.earthing === 'TT') {
+      const ra = supply.raOhm;
+      if (!rcd || !(rcd.idnMa > 0)) out.unknown(tag, nid, zsMsg.ttNoRcdMessage(nodeName(t.nodes[v], nid)));
+      else if (ra === undefined) out.unknown(tag, nid, zsMsg.ttNoRaMessage(nodeName(t.nodes[v], nid)));
+      else {
+        const volts = ra * (rcd.idnMa / 1000);
+        if (!(volts <= 50))
+          out.fail(tag, 'rcdTouch', nid, zsMsg.ttFailMessage(nodeName(t.nodes[v], nid), volts));
+      }
+    }
+  }
+  if (t.loadMotor[v] && t.nodeKind[v] === KIND_LOAD && ctx.results.loads[nid]) {
+    const motor = motorStartFor(
+      t.nodes[v] as Load,
+      ctx.results,
+      (out.topology ??= motorTopology(t)),
+      ctx.source,
+      u0V,
+    );
+    if (motor) {
+      out.motors.set(v, motor);
+      if (motor.check.pass === false) out.fail(tag, 'motorDip', nid, motor.check.message);
+      else if (motor.check.pass === null) out.unknown(tag, nid, motor.check.message);
+    }
+  }
 }

@@ -7,6 +7,7 @@
 import type { Cable, NodeElement, ProjectDocument } from '../../model/types.ts';
 import type { Results } from '../results.ts';
 import { dropStateOf } from '../solveDrop.ts';
+import type { DropState } from '../dropState.ts';
 import { cableIbA } from '../flow.ts';
 import { KIND_BOARD, KIND_INVALID, KIND_JUNCTION, KIND_LOAD, KIND_SUPPLY } from '../dropState.ts';
 import { breadthFirstRank } from '../findingOrder.ts';
@@ -36,8 +37,14 @@ export interface TreeInputs {
   reached: Uint8Array;
   /** Node kind codes (dropState KIND_*). */
   nodeKind: Uint8Array;
+  /** The id of each fed node (so the checks need not read the node). */
+  nodeIds: readonly string[];
+  /** 1 where a load has motor starting data. */
+  loadMotor: Uint8Array;
   /** 1 where the results hold an entry for the cable; null where every fed cable has one. */
   cableHasResult: Uint8Array | null;
+  /** The drop solver's state when the figures come from it (the pass then reads its arrays directly). */
+  drop: DropState | null;
   /** Design current Ib and reactance per metre (parallel cables combined) of a fed cable. */
   ibA: (j: number) => number;
   xOhmPerM: (j: number) => number;
@@ -52,6 +59,16 @@ const KINDS: Readonly<Record<string, number>> = {
   junction: KIND_JUNCTION,
   load: KIND_LOAD,
 };
+
+/**
+ * Reactance per metre of a cable from the drop solver's conductor row, parallel cables combined: the
+ * same figure CableResultView.xOhmPerM gives (the oracle test holds the two together).
+ */
+export function dropXOhmPerM(s: DropState, j: number, parallel: unknown): number {
+  const row = s.cableRow[j];
+  const n = typeof parallel === 'number' && parallel >= 1 ? parallel : 1;
+  return row ? (row.xOhmPerM * (row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1)) / n : NaN;
+}
 
 /** The drop solver's tree and figures, read from its arrays. */
 function fromDropState(doc: ProjectDocument, results: Results): TreeInputs | undefined {
@@ -73,15 +90,12 @@ function fromDropState(doc: ProjectDocument, results: Results): TreeInputs | und
     feeding: s.parentCable,
     reached: s.reached,
     nodeKind: s.nodeKind,
+    nodeIds: s.nodeIds,
+    loadMotor: s.loadMotor,
     cableHasResult: null,
+    drop: s,
     ibA: (j) => cableIbA(s, j),
-    // The same figure CableResultView.xOhmPerM gives (the oracle test holds the two together).
-    xOhmPerM: (j) => {
-      const row = s.cableRow[j];
-      const parallel = (cables[j] as { parallel?: unknown }).parallel;
-      const n = typeof parallel === 'number' && parallel >= 1 ? parallel : 1;
-      return row ? (row.xOhmPerM * (row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1)) / n : NaN;
-    },
+    xOhmPerM: (j) => dropXOhmPerM(s, j, (cables[j] as { parallel?: unknown }).parallel),
     cableOf: (id) => {
       const j = s.cableIndex.get(id);
       return j !== undefined && cableIds[j] === id ? j : -1;
@@ -104,10 +118,14 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
   const m = cables.length;
   const nodeIndex = new Map<string, number>();
   const nodeKind = new Uint8Array(n).fill(KIND_INVALID);
+  const nodeIds = new Array<string>(n);
+  const loadMotor = new Uint8Array(n);
   for (let i = 0; i < n; i++) {
     const node = nodes[i]!;
     nodeIndex.set(node.id, i);
+    nodeIds[i] = node.id;
     nodeKind[i] = KINDS[node.kind] ?? KIND_INVALID;
+    if (node.kind === 'load' && node.motor) loadMotor[i] = 1;
   }
   const cableIndex = new Map<string, number>();
   const cableFrom = new Int32Array(m).fill(-1);
@@ -176,7 +194,10 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
     feeding,
     reached: seen,
     nodeKind,
+    nodeIds,
+    loadMotor,
     cableHasResult: hasResult,
+    drop: null,
     ibA: (j) => ibA[j]!,
     xOhmPerM: (j) => xOhmPerM[j]!,
     cableOf: (id) => cableIndex.get(id) ?? -1,
