@@ -21,6 +21,7 @@ import {
   requiredDisconnectionS,
 } from './disconnection.ts';
 import { FAIL_CODES } from './protectionWorking.ts';
+import { flattenMessages } from '../findings.ts';
 import type { CapacityMemo } from './capacityMemo.ts';
 import { KIND_LOAD, type TreeInputs } from './treeInputs.ts';
 import { cableIbA } from '../flow.ts';
@@ -70,6 +71,8 @@ export class Tagged {
   push(tag: number, f: Finding): void {
     this.list.push(f);
     this.tags.push(tag);
+    // As each message is made, so its parts are garbage at once.
+    flattenMessages(this.list, this.list.length - 1);
   }
   /** A reached segment whose conductor or cpc IEC 60228 does not list: no figures, one warning. */
   noResistance(t: TreeInputs, j: number, cable: Cable): void {
