@@ -6,6 +6,13 @@
  * everything into a plain Map and carries on, so the cost stays linear.
  */
 const MAX_PROBE = 48;
+/**
+ * A slot holds position + 1 in its low 24 bits and the top 8 bits of the id's hash above them, so
+ * a probe passes over another id's slot without reading that id (a cache miss at 100,000 ids) in
+ * all but 1 case in 256.
+ */
+const TAG_BITS = 0xff000000 | 0;
+const POSITION_BITS = 0x00ffffff;
 
 function hashOf(id: string): number {
   // FNV-1a over UTF-16 code units, with a final mix so close ids spread over the table.
@@ -31,6 +38,8 @@ export class IdIndex implements ReadonlyMap<string, number> {
     while (size < capacity * 2) size *= 2;
     this.slots = new Int32Array(size);
     this.mask = size - 1;
+    // Positions beyond what a slot can hold: a plain map from the start.
+    if (capacity >= POSITION_BITS) this.fallback = new Map();
   }
 
   /**
@@ -47,16 +56,19 @@ export class IdIndex implements ReadonlyMap<string, number> {
       return i;
     }
     const { slots, mask, ids } = this;
-    let at = hashOf(id) & mask;
+    const hash = hashOf(id);
+    const tag = hash & TAG_BITS;
+    let at = hash & mask;
     for (let probe = 0; probe < MAX_PROBE; probe++) {
       const entry = slots[at] as number;
       if (entry === 0) {
-        slots[at] = i + 1;
+        slots[at] = (i + 1) | tag;
         ids[i] = id;
         this.count++;
         return i;
       }
-      if (ids[entry - 1] === id) return entry - 1;
+      const held = (entry & POSITION_BITS) - 1;
+      if ((entry & TAG_BITS) === tag && ids[held] === id) return held;
       at = (at + 1) & mask;
     }
     this.fallback = new Map();
@@ -68,11 +80,14 @@ export class IdIndex implements ReadonlyMap<string, number> {
     if (typeof id !== 'string') return undefined;
     if (this.fallback) return this.fallback.get(id);
     const { slots, mask, ids } = this;
-    let at = hashOf(id) & mask;
+    const hash = hashOf(id);
+    const tag = hash & TAG_BITS;
+    let at = hash & mask;
     for (let probe = 0; probe < MAX_PROBE; probe++) {
       const entry = slots[at] as number;
       if (entry === 0) return undefined;
-      if (ids[entry - 1] === id) return entry - 1;
+      const held = (entry & POSITION_BITS) - 1;
+      if ((entry & TAG_BITS) === tag && ids[held] === id) return held;
       at = (at + 1) & mask;
     }
     return undefined;
