@@ -8,7 +8,6 @@
 import type { Cable, Device, Load } from '../../model/types.ts';
 import type { Finding } from '../results.ts';
 import { CMIN, conventionalOperatingMultiple, settingA, type FuseDataSet } from '../../catalogue/devices.ts';
-import { tableMinimumCpcMm2 } from '../../catalogue/kValues.ts';
 import type { Check, CheckKey, MotorStartResult } from './protectionResults.ts';
 import type { Topology } from './topology.ts';
 import * as msg from './cableChecks.ts';
@@ -22,7 +21,7 @@ import {
 } from './disconnection.ts';
 import { FAIL_CODES } from './protectionWorking.ts';
 import { flattenMessages } from '../findings.ts';
-import type { CapacityMemo } from './capacityMemo.ts';
+import type { CapacityMemo, ConductorFigures } from './capacityMemo.ts';
 import { KIND_LOAD, type TreeInputs } from './treeInputs.ts';
 import { cableIbA } from '../flow.ts';
 import { motorStartFor } from '../motorStart.ts';
@@ -114,6 +113,7 @@ export function cableFindings(
   v: number,
   u: number,
   cable: Cable,
+  conductor: ConductorFigures,
 ): void {
   const { t, u0V, fuses, supply } = ctx;
   const tag = 2 * t.rank[v]!;
@@ -167,11 +167,7 @@ export function cableFindings(
       );
   }
   // Adiabatic check on the cpc at the far end's earth fault current.
-  const cpc = cable.cpc;
-  const byTable =
-    cpc.kind !== 'armour' &&
-    cpc.material === cable.material &&
-    cpc.sizeMm2 >= tableMinimumCpcMm2(cable.sizeMm2);
+  const byTable = conductor.byTable;
   const earthFaultA = (CMIN * u0V) / hypot(a.zhR[v]!, a.zhX[v]!);
   const tS = device ? operatingTimeS(device, earthFaultA, fuses) : null;
   if (tS === null) {
@@ -182,8 +178,8 @@ export function cableFindings(
         msg.cpcNotAssessedMessage(cable.name, device ? msg.CPC_WHY_SLOW : msg.CPC_WHY_NO_DEVICE),
       );
   } else {
-    const sMin = msg.adiabaticMinimumMm2(earthFaultA, tS, memo.cpcK(cpc, cable.insulation));
-    const cpcMm2 = cpc.sizeMm2 * Math.max(1, cable.parallel);
+    const sMin = msg.adiabaticMinimumMm2(earthFaultA, tS, conductor.cpcK);
+    const cpcMm2 = cable.cpc.sizeMm2 * Math.max(1, cable.parallel);
     if (!(cpcMm2 >= sMin || byTable)) out.fail(tag, 'cpc', id, msg.cpcFailMessage(cable.name, cpcMm2, sMin));
   }
 }

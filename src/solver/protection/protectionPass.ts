@@ -14,15 +14,8 @@ import type { Cable, Supply } from '../../model/types.ts';
 import type { Finding, Results } from '../results.ts';
 import type { CapacityTable } from '../../catalogue/capacityTables.ts';
 import type { FuseDataSet } from '../../catalogue/devices.ts';
-import { atTemperature } from '../../catalogue/iec60228.ts';
 import type { Check, MotorStartResult } from './protectionResults.ts';
-import {
-  cpcAtTemperature,
-  cpcResistance20OhmPerM,
-  lineResistance20OhmPerM,
-  operatingTempC,
-  type SourceImpedance,
-} from './impedance.ts';
+import type { SourceImpedance } from './impedance.ts';
 import { KIND_BOARD, KIND_JUNCTION, type TreeInputs } from './treeInputs.ts';
 import { dropXOhmPerM } from './treeInputs.ts';
 import { PassArrays } from './passArrays.ts';
@@ -62,7 +55,8 @@ function circuits(t: TreeInputs, a: PassArrays): void {
 
 /**
  * The walk: for each segment, what its cable contributes on its own (the same expressions as
- * segmentLoop), the loop impedances at its far node, then the checks of both.
+ * segmentLoop: the per-metre figures of its conductors, from the memo, times its length over its
+ * parallel count), the loop impedances at its far node, then the checks of both.
  */
 function walkTree(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagged): void {
   const { t } = ctx;
@@ -76,20 +70,17 @@ function walkTree(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagg
     // Own device or, through a junction, the one upstream (parents come first).
     const parent = nodeKind[u] === KIND_JUNCTION ? feeding[u]! : -1;
     a.protBy[j] = cable.device ? j : parent >= 0 ? a.protBy[parent]! : -1;
-    const r1 = lineResistance20OhmPerM(cable.material, cable.sizeMm2);
-    const r2 = cpcResistance20OhmPerM(cable.cpc);
-    if (r1 === undefined || r2 === undefined) {
+    const conductor = memo.conductor(cable);
+    if (!conductor.known) {
       a.hasCable[j] = 2;
       out.noResistance(t, j, cable);
       continue;
     }
-    const tempC = operatingTempC(cable.insulation);
     const n = Math.max(1, cable.parallel);
     const lengthM = cable.lengthM;
-    const hot = (atTemperature(r1, cable.material, tempC) + cpcAtTemperature(r2, cable.cpc, tempC)) * lengthM;
-    const r1r2Hot = hot / n;
-    const r1r2Cold = ((r1 + r2) * lengthM) / n;
-    const r1Cold = (r1 * lengthM) / n;
+    const r1r2Hot = (conductor.r1r2HotPerM * lengthM) / n;
+    const r1r2Cold = (conductor.r1r2ColdPerM * lengthM) / n;
+    const r1Cold = (conductor.r1PerM * lengthM) / n;
     // The reactance per metre already combines parallel cables; dividing again would understate X.
     const xLen = (drop ? dropXOhmPerM(drop, j, cable.parallel) : t.xOhmPerM(j)) * lengthM;
     a.r1r2Hot[j] = r1r2Hot;
@@ -107,7 +98,7 @@ function walkTree(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagg
     a.hasCable[j] = 1;
     a.hasNode[v] = 1;
     a.capAt[j] = memo.figuresAt(cable);
-    cableFindings(ctx, a, memo, out, j, v, u, cable);
+    cableFindings(ctx, a, memo, out, j, v, u, cable, conductor);
     nodeFindings(ctx, a, out, j, v);
   }
 }
