@@ -29,16 +29,24 @@ export class FindingTail {
     const count = this.nodes.length;
     if (count < 2 || !s.walkIsDocumentOrder) return;
     const rank = breadthFirstRank(s);
-    const keys = this.nodes.map((v) => rank[v] as number);
-    const idx = Array.from({ length: count }, (_, k) => k);
-    idx.sort(
-      (a, b) =>
-        (leavesFirst
-          ? (keys[b] as number) - (keys[a] as number)
-          : (keys[a] as number) - (keys[b] as number)) || a - b,
-    );
     const tail = this.findings.slice(this.start, this.start + count);
-    for (let k = 0; k < count; k++) this.findings[this.start + k] = tail[idx[k] as number] as DropFinding;
+    const top = s.orderLength - 1;
+    // Position of a finding's node in the order wanted: breadth-first, or its reverse.
+    const key = (k: number) => {
+      const r = rank[this.nodes[k] as number] as number;
+      return leavesFirst ? top - r : r;
+    };
+    if (count <= 64) {
+      const idx = Array.from({ length: count }, (_, k) => k);
+      idx.sort((a, b) => key(a) - key(b) || a - b);
+      for (let k = 0; k < count; k++) this.findings[this.start + k] = tail[idx[k] as number] as DropFinding;
+      return;
+    }
+    // A stable counting sort by position: linear, where a comparison sort of many findings is not.
+    const at = new Int32Array(s.orderLength + 1);
+    for (let k = 0; k < count; k++) at[key(k) + 1]!++;
+    for (let r = 0; r < s.orderLength; r++) at[r + 1]! += at[r]!;
+    for (let k = 0; k < count; k++) this.findings[this.start + at[key(k)]!++] = tail[k] as DropFinding;
   }
 }
 

@@ -48,18 +48,29 @@ function threeDigits(n: number): string | undefined {
     r = 100;
     e++;
   }
-  // The digits without trailing zeros, and where the point goes (as Number#toString writes them).
-  const digits = DIGITS[r - 100]!;
-  const k = digits.length;
+  // Where the point goes, as Number#toString writes it; the usual places are written once.
   const point = e + 1;
-  const text =
-    point >= k
-      ? digits + '0'.repeat(point - k)
-      : point > 0
-        ? `${digits.slice(0, point)}.${digits.slice(point)}`
-        : `0.${'0'.repeat(-point)}${digits}`;
+  let text: string;
+  if (point >= -3 && point <= 3) {
+    const at = (r - 100) * 7 + point + 3;
+    text = WRITTEN[at] ??= write(r, point);
+  } else text = write(r, point);
   return n < 0 ? `-${text}` : text;
 }
+
+/** r x 10^(point - 3) in Number#toString's fixed notation. */
+function write(r: number, point: number): string {
+  const digits = DIGITS[r - 100]!;
+  const k = digits.length;
+  return point >= k
+    ? digits + '0'.repeat(point - k)
+    : point > 0
+      ? `${digits.slice(0, point)}.${digits.slice(point)}`
+      : `0.${'0'.repeat(-point)}${digits}`;
+}
+
+/** Texts already written, by digits and point position (-3 to 3): most message figures repeat. */
+const WRITTEN: (string | undefined)[] = new Array<string | undefined>(900 * 7);
 
 /**
  * Rounds for display in messages only; results keep full precision.
