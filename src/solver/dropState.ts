@@ -62,10 +62,15 @@ export interface DropState {
   cableBad: Uint8Array;
   /** 1 where some cable between the origin and the node could not be computed. */
   incomplete: Uint8Array;
-  cableRow: (ConductorRow | undefined)[];
-  /** Series impedance of one conductor of the whole segment, parallel cables combined, ohm. */
-  cableZr: Float64Array;
-  cableZx: Float64Array;
+  /**
+   * Each cable's conductor row, as a position in `rows` (0 where the data set has none): one small
+   * list per solve instead of an entry per cable.
+   */
+  cableRowAt: Int32Array;
+  /** The conductor rows the cables use; `rows[0]` is none. */
+  rows: (ConductorRow | undefined)[];
+  /** A valid parallel count (1 to 100), 0 where invalid: with the row and length it gives the segment's impedance. */
+  cableParallel: Uint8Array;
   /** Valid one-way length, 0 where invalid. */
   cableLengthM: Float64Array;
 
@@ -115,7 +120,11 @@ export interface DropState {
   /** 1 where an element's fields did not pass the fast checks, so the careful check must run. */
   nodeCheck: Uint8Array;
   cableCheck: Uint8Array;
-  /** A load's demand as typed (value, unit code 0 W, 1 kW, 2 kVA, 3 A), power factor, demand factor. */
+  /**
+   * A load's demand as typed (value, unit code 0 W, 1 kW, 2 kVA, 3 A), power factor, demand factor.
+   * Value, power factor and demand factor are read until the upward pass only: they share their
+   * memory with `slackPct`.
+   */
   loadValue: Float64Array;
   loadUnit: Uint8Array;
   loadPf: Float64Array;
@@ -131,7 +140,7 @@ export interface DropState {
   /** Scratch for the passes: phases needed below a node, 1 where a three-phase load or cable is below. */
   needBelow: Uint8Array;
   threeBelow: Uint8Array;
-  /** Scratch for the judge: smallest slack below a node per phase, % of U0. */
+  /** Scratch for the judge: smallest slack below a node per phase, % of U0 (over the load fields). */
   slackPct: Float64Array;
   /**
    * The reached nodes in the order the numeric passes walk them (`orderLength` long, parents
@@ -185,20 +194,33 @@ class Slab {
 
 export type DropArrays = ReturnType<typeof layout>;
 
+/**
+ * A load's typed demand fields are read only until its current is set (the upward pass); the
+ * judge's slack is needed only after that. So the two share one region of the buffer.
+ */
+function loadFields(region: Float64Array, n: number) {
+  return {
+    loadValue: region.subarray(0, n),
+    loadPf: region.subarray(n, 2 * n),
+    loadDf: region.subarray(2 * n, 3 * n),
+    slackPct: region,
+  };
+}
+
 function layout(a: Slab, n: number, m: number) {
   return {
     nodeKind: a.u8(n).fill(KIND_INVALID),
     parentCable: a.i32(n).fill(-1),
     cableFrom: a.i32(m).fill(-1),
     cableTo: a.i32(m).fill(-1),
+    cableRowAt: a.i32(m),
     order: a.i32(n),
     reached: a.u8(n),
     nodePhases: a.u8(n),
     cablePhases: a.u8(m),
     cableBad: a.u8(m),
     incomplete: a.u8(n),
-    cableZr: a.f64(m),
-    cableZx: a.f64(m),
+    cableParallel: a.u8(m),
     cableLengthM: a.f64(m),
     loadCurrentA: a.f64(n),
     loadValid: a.u8(n),
@@ -224,17 +246,14 @@ function layout(a: Slab, n: number, m: number) {
     maxLengthM: a.f64(m).fill(NaN),
     nodeCheck: a.u8(n),
     cableCheck: a.u8(m),
-    loadValue: a.f64(n),
     loadUnit: a.u8(n),
-    loadPf: a.f64(n),
-    loadDf: a.f64(n),
     loadDeclared: a.u8(n),
     loadCategory: a.u8(n),
     loadMotor: a.u8(n),
     cablePhasesField: a.u8(m),
     needBelow: a.u8(n),
     threeBelow: a.u8(n),
-    slackPct: a.f64(n * 3),
+    ...loadFields(a.f64(n * 3), n),
     walk: a.i32(n),
     rank: a.i32(n),
     childStart: a.i32(n + 1),
@@ -247,6 +266,11 @@ export function allocateArrays(n: number, m: number): DropArrays {
   const measure = new Slab(undefined);
   layout(measure, n, m);
   return layout(new Slab(new ArrayBuffer(measure.bytes)), n, m);
+}
+
+/** The conductor row of cable `j`, or undefined where the data set has none. */
+export function cableRow(s: DropState, j: number): ConductorRow | undefined {
+  return s.rows[s.cableRowAt[j] as number];
 }
 
 export type { Load };

@@ -11,7 +11,8 @@
  * cumulative drop is their sum and the voltage shown is U0 minus it.
  */
 import type { DropState } from './dropState.ts';
-import { KIND_BOARD, KIND_LOAD, PHASE_COS, PHASE_SIN } from './dropState.ts';
+import { KIND_BOARD, KIND_LOAD, PHASE_COS, PHASE_SIN, cableRow } from './dropState.ts';
+import type { ConductorRow } from '../catalogue/catalogueSet.ts';
 import { assignCablePhases, supplyMask } from './phases.ts';
 import { setLoadCurrent } from './validateElements.ts';
 import { FindingTail } from './findingOrder.ts';
@@ -138,8 +139,14 @@ function segmentDrop(s: DropState, v: number, j: number, u: number): void {
   const ni = ji0 + ji1 + ji2;
   s.nRe[j] = nr;
   s.nIm[j] = ni;
-  const zr = s.cableZr[j] as number;
-  const zx = s.cableZx[j] as number;
+  // Series impedance of one conductor of the whole segment, parallel cables combined (the segment
+  // is solvable, so its row, length and parallel count are valid).
+  const row = cableRow(s, j) as ConductorRow;
+  const lengthM = s.cableLengthM[j] as number;
+  const p = s.cableParallel[j] as number;
+  const scaleX = row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1;
+  const zr = (row.rOhmPerM * lengthM) / p;
+  const zx = (row.xOhmPerM * scaleX * lengthM) / p;
   const cb = j * 3;
   const ub = u * 3;
   if (mask & 1) drop(s, cb, b, ub, 0, zr, zx, jr0 + nr, ji0 + ni);

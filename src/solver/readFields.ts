@@ -34,37 +34,42 @@ function unitCode(unit: unknown): number {
 
 /**
  * findConductor remembered per cable type and size for one solve: a network uses a few dozen
- * types, so most cables cost four map hits instead of building a text key.
+ * types, so most cables cost four map hits instead of building a text key. Answers with the row's
+ * position in the state's `rows` (0 where there is none).
  */
 export class RowMemo {
-  private readonly byMaterial = new Map<string, Map<string, Map<string, Map<number, ConductorRow | null>>>>();
-  constructor(private readonly set: CatalogueSet) {}
+  private readonly byMaterial = new Map<string, Map<string, Map<string, Map<number, number>>>>();
+  constructor(
+    private readonly set: CatalogueSet,
+    private readonly rows: (ConductorRow | undefined)[],
+  ) {}
 
-  find(
-    material: unknown,
-    insulation: unknown,
-    construction: unknown,
-    sizeMm2: unknown,
-  ): ConductorRow | undefined {
+  private add(row: ConductorRow | undefined): number {
+    if (!row) return 0;
+    this.rows.push(row);
+    return this.rows.length - 1;
+  }
+
+  find(material: unknown, insulation: unknown, construction: unknown, sizeMm2: unknown): number {
     if (
       typeof material !== 'string' ||
       typeof insulation !== 'string' ||
       typeof construction !== 'string' ||
       typeof sizeMm2 !== 'number'
     )
-      return findConductor(this.set, material, insulation, construction, sizeMm2);
+      return this.add(findConductor(this.set, material, insulation, construction, sizeMm2));
     let a = this.byMaterial.get(material);
     if (!a) this.byMaterial.set(material, (a = new Map()));
     let b = a.get(insulation);
     if (!b) a.set(insulation, (b = new Map()));
     let c = b.get(construction);
     if (!c) b.set(construction, (c = new Map()));
-    let row = c.get(sizeMm2);
-    if (row === undefined) {
-      row = findConductor(this.set, material, insulation, construction, sizeMm2) ?? null;
-      c.set(sizeMm2, row);
+    let at = c.get(sizeMm2);
+    if (at === undefined) {
+      at = this.add(findConductor(this.set, material, insulation, construction, sizeMm2));
+      c.set(sizeMm2, at);
     }
-    return row ?? undefined;
+    return at;
   }
 }
 
@@ -108,7 +113,7 @@ export function readNode(s: DropState, i: number, el: Loose, kind: number): void
   } else s.nodeCheck[i] = 1;
 }
 
-/** Stores a tree cable's length, conductor row, impedance and phases; flags it when a field is not well formed. */
+/** Stores a tree cable's length, conductor row, parallel count and phases; flags it when a field is not well formed. */
 export function readCable(s: DropState, j: number, c: Loose, rows: RowMemo): void {
   const phases = c.phases;
   s.cablePhasesField[j] = phases === 3 ? 3 : phases === 1 ? 1 : 0;
@@ -117,11 +122,9 @@ export function readCable(s: DropState, j: number, c: Loose, rows: RowMemo): voi
   if (okLength) s.cableLengthM[j] = lengthM;
   const p = c.parallel;
   const okParallel = typeof p === 'number' && Number.isInteger(p) && p >= 1 && p <= 100;
-  const row = rows.find(c.material, c.insulation, c.construction, c.sizeMm2);
-  s.cableRow[j] = row;
-  if (okLength && okParallel && row) {
-    const scaleX = row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1;
-    s.cableZr[j] = (row.rOhmPerM * lengthM) / p;
-    s.cableZx[j] = (row.xOhmPerM * scaleX * lengthM) / p;
-  } else s.cableCheck[j] = 1;
+  if (okParallel) s.cableParallel[j] = p;
+  const at = rows.find(c.material, c.insulation, c.construction, c.sizeMm2);
+  s.cableRowAt[j] = at;
+  const row = s.rows[at];
+  if (!(okLength && okParallel && row)) s.cableCheck[j] = 1;
 }

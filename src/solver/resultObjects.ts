@@ -16,7 +16,7 @@ import type {
   Working,
 } from './results.ts';
 import type { DropState } from './dropState.ts';
-import { KIND_LOAD } from './dropState.ts';
+import { KIND_LOAD, cableRow } from './dropState.ts';
 import { PHASE_NAMES, dropMethod, pathTo, phasesOf, worstCablePhase, worstNodeCum } from './dropMethod.ts';
 import type { DropMethod } from './dropMethod.ts';
 import { cableIbA } from './flow.ts';
@@ -81,7 +81,7 @@ export class CableResultView implements CableResult {
       this.currentsA = currentsAt(s, v, mask, nr, ni);
     } else this.currentsA = { ...NO_CURRENT };
     this.phases = phasesOf(mask);
-    const row = s.cableRow[j];
+    const row = cableRow(s, j);
     const parallel = (s.cables[j] as { parallel?: unknown }).parallel;
     const n = typeof parallel === 'number' && parallel >= 1 ? parallel : 1;
     this.rOhmPerM = row ? row.rOhmPerM / n : NaN;

@@ -13,7 +13,7 @@
  */
 import type { ProjectDocument } from '../model/types.ts';
 import { STANDARD_EDITIONS } from '../model/cautions.ts';
-import type { CatalogueSet, ConductorRow } from '../catalogue/catalogueSet.ts';
+import type { CatalogueSet } from '../catalogue/catalogueSet.ts';
 import { BUILTIN_CATALOGUE } from '../catalogue/builtinConductors.ts';
 import { limitProfile } from '../catalogue/limits.ts';
 import type { LimitProfileId } from '../model/types.ts';
@@ -105,7 +105,7 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
     cableIndex: new IdIndex(cableIds, m),
     nodeIds,
     cableIds,
-    cableRow: new Array<ConductorRow | undefined>(m).fill(undefined),
+    rows: [undefined],
     orderLength: 0,
     root: -1,
     walkIsDocumentOrder: false,

@@ -111,7 +111,7 @@ export function buildTopology(s: DropState): void {
     });
   }
 
-  const rows = new RowMemo(s.catalogue);
+  const rows = new RowMemo(s.catalogue, s.rows);
   // childStart[from + 1] counts children first, then becomes the start of each list.
   const start = s.childStart;
   let lastTo = -1;

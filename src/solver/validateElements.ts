@@ -44,7 +44,7 @@ export function validateCables(s: DropState): void {
         elementId: id,
         message: `cable ${id}: parallel must be a whole number of cables from 1 to 100, got ${shown(parallel)}.`,
       });
-    if (!s.cableRow[j]) {
+    if (!s.cableRowAt[j]) {
       const sizes = sizesFor(s.catalogue, c.material, c.insulation, c.construction);
       findings.push(
         sizes.length > 0
@@ -75,9 +75,7 @@ function forgetUnreached(s: DropState): void {
     const to = cableTo[j] as number;
     if (to < 0 || reached[to]) continue;
     s.cableLengthM[j] = 0;
-    s.cableZr[j] = 0;
-    s.cableZx[j] = 0;
-    s.cableRow[j] = undefined;
+    s.cableRowAt[j] = 0;
   }
 }
 

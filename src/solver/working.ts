@@ -5,7 +5,7 @@
  */
 import type { Working, WorkingInput } from './results.ts';
 import type { DropState } from './dropState.ts';
-import { KIND_BOARD, KIND_LOAD } from './dropState.ts';
+import { KIND_BOARD, KIND_LOAD, cableRow } from './dropState.ts';
 import { PHASE_NAMES, dropMethod, pathTo, phasesOf, worstCablePhase, worstNodeCum } from './dropMethod.ts';
 import { cableIbA, deviceRatingA } from './flow.ts';
 import { loadPhaseMask } from './judge.ts';
@@ -21,7 +21,7 @@ function phasorText(re: number, im: number): string {
 }
 
 function catalogueSource(s: DropState, j: number): string {
-  const row = s.cableRow[j];
+  const row = cableRow(s, j);
   return row ? `data set "${s.catalogue.title}" (${s.catalogue.id}): ${row.source}` : 'no catalogue row';
 }
 
@@ -74,7 +74,7 @@ export function cableWorking(s: DropState, j: number): Working[] {
     inputs: currentInputs,
     result: { value: ib, unit: 'A' },
   });
-  const row = s.cableRow[j];
+  const row = cableRow(s, j);
   const parallel = typeof c.parallel === 'number' ? c.parallel : NaN;
   if (row) {
     const scaleX = row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1;
@@ -149,7 +149,7 @@ function dropRecord(s: DropState, j: number, ib: number): Working {
   const method = dropMethod(s, j);
   const mask = s.cablePhases[j] as number;
   const v = s.cableTo[j] as number;
-  const row = s.cableRow[j];
+  const row = cableRow(s, j);
   const parallel = (s.cables[j] as unknown as { parallel: number }).parallel;
   const scaleX = row?.frequencyHz ? s.frequencyHz / row.frequencyHz : 1;
   const inputs: WorkingInput[] = [

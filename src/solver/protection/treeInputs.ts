@@ -7,7 +7,7 @@
 import type { Cable, NodeElement, ProjectDocument } from '../../model/types.ts';
 import type { Results } from '../results.ts';
 import { dropStateOf } from '../solveDrop.ts';
-import type { DropState } from '../dropState.ts';
+import { cableRow, type DropState } from '../dropState.ts';
 import { cableIbA } from '../flow.ts';
 import { KIND_BOARD, KIND_INVALID, KIND_JUNCTION, KIND_LOAD, KIND_SUPPLY } from '../dropState.ts';
 import { breadthFirstRank } from '../findingOrder.ts';
@@ -65,7 +65,7 @@ const KINDS: Readonly<Record<string, number>> = {
  * same figure CableResultView.xOhmPerM gives (the oracle test holds the two together).
  */
 export function dropXOhmPerM(s: DropState, j: number, parallel: unknown): number {
-  const row = s.cableRow[j];
+  const row = cableRow(s, j);
   const n = typeof parallel === 'number' && parallel >= 1 ? parallel : 1;
   return row ? (row.xOhmPerM * (row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1)) / n : NaN;
 }
