@@ -56,7 +56,7 @@ export function attachProtection(doc: ProjectDocument, results: Results, catalog
   const u0V = supply.u0V;
   const pass = protectionPass({ t, results, supply, u0V, source, fuses, tables }, findings);
   const records = protectedRecords(
-    { t, a: pass.a, supply, u0V, source, fuses, tables, motors: pass.motors },
+    { t, a: pass.a, memo: pass.memo, supply, u0V, source, fuses, tables, motors: pass.motors },
     results,
   );
   let balance: ProtectionSummary['balance'] | undefined;

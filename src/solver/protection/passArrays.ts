@@ -1,12 +1,12 @@
 /**
  * The protection pass's working memory: per node the accumulated loop impedances (R and X apart),
- * per cable R1 + R2, capacity and the device that protects it, as flat typed arrays. Only what the
- * protection results read is kept per element; the pass works out everything else as it goes.
+ * per cable its capacity figures and the device that protects it, as flat typed arrays. Only what
+ * the protection results cannot cheaply work out again is kept per element: they work out R1 + R2,
+ * the required time and Zs max from the memo and the device when they are built.
  */
 import type { NodeElement, Supply } from '../../model/types.ts';
 import type { FaultLevel } from './protectionResults.ts';
 import { C_MAX, type SourceImpedance } from './impedance.ts';
-import type { CapacityFigures } from './capacity.ts';
 import { hypot } from '../hypot.ts';
 
 export class PassArrays {
@@ -25,8 +25,6 @@ export class PassArrays {
   readonly fpX: Float64Array;
   /** 1 where every segment from the origin is three-phase. */
   readonly three: Uint8Array;
-  readonly zsMax: Float64Array;
-  readonly zsMaxKnown: Uint8Array;
   /** Scratch: the fault level at a node as a sending end, kA, worked out once (NaN until then). */
   readonly sendingKa: Float64Array;
 
@@ -36,19 +34,14 @@ export class PassArrays {
   readonly protBy: Int32Array;
   /** 1 distribution circuit, 0 final circuit. */
   readonly circuit: Uint8Array;
-  readonly requiredS: Float64Array;
-  readonly r1r2Hot: Float64Array;
-  readonly r1r2Cold: Float64Array;
-  /** Position in `capacity` of the cable's capacity figures (or the reason there are none). */
+  /** Position in the memo's list of the cable's capacity figures (or the reason there are none). */
   readonly capAt: Int32Array;
-  /** Capacity figures met in this solve (shared by the cables with the same type and conditions). */
-  capacity: readonly (CapacityFigures | { error: string })[] = [];
 
   constructor(n: number, m: number) {
     // One buffer for every array: one allocation per solve, not twenty.
-    const f64 = 10 * n + 3 * m;
+    const f64 = 9 * n;
     const i32 = 2 * m;
-    const u8 = 4 * n + 2 * m;
+    const u8 = 3 * n + 2 * m;
     const buffer = new ArrayBuffer(f64 * 8 + i32 * 4 + u8);
     let at = 0;
     const f = (len: number) => {
@@ -73,17 +66,12 @@ export class PassArrays {
     this.flX = f(n);
     this.fpR = f(n);
     this.fpX = f(n);
-    this.zsMax = f(n);
     this.sendingKa = f(n).fill(NaN);
-    this.requiredS = f(m);
-    this.r1r2Hot = f(m);
-    this.r1r2Cold = f(m);
     this.protBy = i(m).fill(-1);
     this.capAt = i(m).fill(-1);
     this.acc = u(n);
     this.hasNode = u(n);
     this.three = u(n);
-    this.zsMaxKnown = u(n);
     this.hasCable = u(m);
     this.circuit = u(m);
   }

@@ -30,7 +30,7 @@ import { faultMaxA, nodeName, type PassArrays } from './passArrays.ts';
 import type { PassContext } from './protectionPass.ts';
 
 /** Where the fuse data or the required time give no Ia (operatingCurrent answers with a reason). */
-function iaUnknown(device: Device, requiredS: number, fuses: FuseDataSet): boolean {
+export function iaUnknown(device: Device, requiredS: number, fuses: FuseDataSet): boolean {
   if (device.type === 'mcb' || device.type === 'rcbo' || device.type === 'mccb') return false;
   if (!fuseRow(fuses, device.ratingA)) return true;
   return !(requiredS === 5 || requiredS === 0.4 || (requiredS > 0.4 && requiredS < 5));
@@ -57,6 +57,8 @@ export class Tagged {
   readonly tags: number[] = [];
   readonly motors = new Map<number, { result: MotorStartResult; check: Check }>();
   topology: Topology | undefined;
+  /** The required disconnection time of the segment just checked, for its far node's check. */
+  requiredS = 5;
   failed = 0;
   unassessed = 0;
   fail(tag: number, key: CheckKey, elementId: string, message: string): void {
@@ -121,7 +123,7 @@ export function cableFindings(
   const device = deviceOf(t.cables, a, j);
   const inA = device ? settingA(device) : null;
   if (device && inA !== null) {
-    a.requiredS[j] = requiredDisconnectionS(
+    out.requiredS = requiredDisconnectionS(
       supply.earthing,
       a.circuit[j] ? 'distribution' : 'final',
       inA,
@@ -193,7 +195,7 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
   const device = deviceOf(t.cables, a, j);
   if (!device) out.unknown(tag, nid, zsMsg.zsNoDeviceMessage(nodeName(t.nodes[v], nid)));
   else {
-    const requiredS = a.requiredS[j]!;
+    const requiredS = out.requiredS;
     const rcd = device.rcd;
     const rcdLimit = rcd && rcd.idnMa > 0 ? 50 / (rcd.idnMa / 1000) : null;
     if (iaUnknown(device, requiredS, fuses)) {
@@ -206,8 +208,6 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
       }
     } else {
       const zsMax = (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses);
-      a.zsMax[v] = zsMax;
-      a.zsMaxKnown[v] = 1;
       const ok = zsOhm <= zsMax || (rcdLimit !== null && zsOhm <= rcdLimit);
       if (!ok)
         out.fail(tag, 'zs', nid, zsMsg.zsFailMessage(nodeName(t.nodes[v], nid), zsOhm, zsMax, requiredS));

@@ -34,6 +34,8 @@ export interface PassContext {
 
 export interface PassOutcome {
   a: PassArrays;
+  /** The per-solve memo the protection results read their capacity and conductor figures from. */
+  memo: CapacityMemo;
   failed: number;
   unassessed: number;
   motors: Map<number, { result: MotorStartResult; check: Check }>;
@@ -83,8 +85,6 @@ function walkTree(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagg
     const r1Cold = (conductor.r1PerM * lengthM) / n;
     // The reactance per metre already combines parallel cables; dividing again would understate X.
     const xLen = (drop ? dropXOhmPerM(drop, j, cable.parallel) : t.xOhmPerM(j)) * lengthM;
-    a.r1r2Hot[j] = r1r2Hot;
-    a.r1r2Cold[j] = r1r2Cold;
     // The earth loop is line out and cpc back: its reactance is taken as twice the line's.
     a.zhR[v] = a.zhR[u]! + r1r2Hot;
     a.zhX[v] = a.zhX[u]! + 2 * xLen;
@@ -108,13 +108,12 @@ export function protectionPass(ctx: PassContext, findings: Finding[]): PassOutco
   const { t } = ctx;
   const a = new PassArrays(t.nodes.length, t.cables.length);
   const out = new Tagged();
-  if (t.root < 0) return { a, failed: 0, unassessed: 0, motors: out.motors };
+  const memo = new CapacityMemo(ctx.tables);
+  if (t.root < 0) return { a, memo, failed: 0, unassessed: 0, motors: out.motors };
   a.seedSupply(t.root, ctx.supply, ctx.source);
   a.hasNode[t.root] = 1;
   circuits(t, a);
-  const memo = new CapacityMemo(ctx.tables);
   walkTree(ctx, a, memo, out);
-  a.capacity = memo.list;
   out.appendSorted(findings, 2 * t.orderEnd + 2);
-  return { a, failed: out.failed, unassessed: out.unassessed, motors: out.motors };
+  return { a, memo, failed: out.failed, unassessed: out.unassessed, motors: out.motors };
 }

@@ -6,7 +6,7 @@
 import type { Cable, Device, Id, Supply } from '../../model/types.ts';
 import type { CableResult, LoadResult, NodeResult, Results } from '../results.ts';
 import type { CapacityTable } from '../../catalogue/capacityTables.ts';
-import { CMIN, TEST_ZS_FACTOR, type FuseDataSet } from '../../catalogue/devices.ts';
+import { CMIN, TEST_ZS_FACTOR, settingA, type FuseDataSet } from '../../catalogue/devices.ts';
 import type {
   CableProtection,
   Check,
@@ -24,10 +24,14 @@ import { pfcWorking, r1r2Working, zsWorking } from './protectionWorking.ts';
 import type { TreeInputs } from './treeInputs.ts';
 import { faultLevelAt, faultMaxA, nodeName, type PassArrays } from './passArrays.ts';
 import { hypot } from '../hypot.ts';
+import type { CapacityMemo } from './capacityMemo.ts';
+import { operatingCurrentA, requiredDisconnectionS } from './disconnection.ts';
+import { iaUnknown } from './protectionFindings.ts';
 
 export interface ViewContext {
   t: TreeInputs;
   a: PassArrays;
+  memo: CapacityMemo;
   supply: Supply;
   u0V: number;
   source: SourceImpedance;
@@ -39,6 +43,16 @@ export interface ViewContext {
 function deviceOf(c: ViewContext, j: number) {
   const by = c.a.protBy[j]!;
   return by >= 0 ? (c.t.cables[by]!.device ?? null) : null;
+}
+
+/** The disconnection time segment `j`'s circuit needs with its device (as the pass decided it). */
+function requiredTimeS(c: ViewContext, j: number, device: Device): number {
+  return requiredDisconnectionS(
+    c.supply.earthing,
+    c.a.circuit[j] ? 'distribution' : 'final',
+    settingA(device),
+    c.u0V,
+  );
 }
 
 /**
@@ -72,7 +86,7 @@ export class CableProtectionView implements CableProtection {
     const device = deviceOf(c, j);
     const ibA = t.ibA(j);
     this.#ibA = ibA;
-    const cap = a.capacity[a.capAt[j]!];
+    const cap = c.memo.list[a.capAt[j]!];
     const figures = cap && !('error' in cap) ? cap : null;
     const izA = figures ? figures.izA : null;
     this.device = device;
@@ -82,9 +96,13 @@ export class CableProtectionView implements CableProtection {
     this.izA = izA;
     this.factors = figures ? { ca: figures.ca, cg: figures.cg, ci: figures.ci } : null;
     this.capacityUse = izA ? ibA / izA : null;
-    this.r1r2HotOhm = a.r1r2Hot[j]!;
-    this.r1r2ColdOhm = a.r1r2Cold[j]!;
-    this.requiredTimeS = device ? a.requiredS[j]! : null;
+    // The same expressions as the pass's walk, from the same per-metre figures.
+    const cable = t.cables[j]!;
+    const conductor = c.memo.conductor(cable);
+    const n = Math.max(1, cable.parallel);
+    this.r1r2HotOhm = (conductor.r1r2HotPerM * cable.lengthM) / n;
+    this.r1r2ColdOhm = (conductor.r1r2ColdPerM * cable.lengthM) / n;
+    this.requiredTimeS = device ? requiredTimeS(c, j, device) : null;
   }
 
   #capacity() {
@@ -146,11 +164,18 @@ export class NodeProtectionView implements NodeProtection {
   #working: Working[] | undefined;
 
   constructor(c: ViewContext, v: number) {
-    const { a, u0V } = c;
+    const { a, t, u0V, fuses } = c;
     this.#c = c;
     this.#v = v;
     const zsOhm = hypot(a.zhR[v]!, a.zhX[v]!);
-    const zsMax = a.zsMaxKnown[v] ? a.zsMax[v]! : null;
+    // Zs max for the protecting device, as the pass's node check works it out.
+    const j = v === t.root ? -1 : t.feeding[v]!;
+    const device = j >= 0 ? deviceOf(c, j) : null;
+    const requiredS = device ? requiredTimeS(c, j, device) : 5;
+    const zsMax =
+      device && !iaUnknown(device, requiredS, fuses)
+        ? (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses)
+        : null;
     this.zsOhm = zsOhm;
     this.zs = { rOhm: a.zhR[v]!, xOhm: a.zhX[v]! };
     // The cold loop has the hot loop's reactance.
@@ -165,13 +190,13 @@ export class NodeProtectionView implements NodeProtection {
   get checks(): Check[] {
     if (!this.#checks) {
       const c = this.#c;
-      const { a, t } = c;
+      const { t } = c;
       const v = this.#v;
       const j = v === t.root ? -1 : t.feeding[v]!;
       if (j < 0) this.#checks = [];
       else {
         const device = deviceOf(c, j);
-        const requiredS = device ? a.requiredS[j]! : 5;
+        const requiredS = device ? requiredTimeS(c, j, device) : 5;
         const name = nodeName(t.nodes[v], t.cables[j]!.to);
         const checks = zsChecks(name, this.zsOhm, device, requiredS, c.supply, c.fuses).checks;
         const motor = c.motors.get(v);
