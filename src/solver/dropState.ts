@@ -94,7 +94,10 @@ export interface DropState {
   dropProj: Float64Array;
   /** Cumulative projected drop from the origin at each node, V, per phase. */
   cum: Float64Array;
-  /** Node voltage phasor to neutral, per phase. */
+  /**
+   * Node voltage phasor to neutral, per phase: empty until a result first asks for one, then the
+   * whole tree's (voltagePhasors in flow.ts). Results read them through that function.
+   */
   vRe: Float64Array;
   vIm: Float64Array;
   /** Route length from the origin, m. */
@@ -233,8 +236,6 @@ function layout(a: Slab, n: number, m: number) {
     nIm: a.f64(m),
     dropProj: a.f64(m * 3),
     cum: a.f64(n * 3),
-    vRe: a.f64(n * 3),
-    vIm: a.f64(n * 3),
     pathLengthM: a.f64(n),
     branchAt: a.i32(n),
     worstPhase: a.i8(n).fill(-1),

@@ -88,10 +88,11 @@ export function cableIbA(s: DropState, j: number): number {
 }
 
 /**
- * Drop of the cable `j` feeding node `v` from `u`, per phase carried; the voltage phasor at `v` is
- * the one at `u` minus it (the caller has copied `u`'s, which phases not carried keep).
+ * Drop of the cable `j` feeding node `v` from `u`, per phase carried. With `phasors` it also sets
+ * the voltage phasor at `v`: the one at `u` minus the phasor drop (the caller has copied `u`'s,
+ * which phases not carried keep). Running it again gives the same figures.
  */
-function segmentDrop(s: DropState, v: number, j: number, u: number): void {
+function segmentDrop(s: DropState, v: number, j: number, u: number, phasors: boolean): void {
   const { iRe, iIm } = s;
   const mask = s.cablePhases[j] as number;
   const b = v * 3;
@@ -149,9 +150,9 @@ function segmentDrop(s: DropState, v: number, j: number, u: number): void {
   const zx = (row.xOhmPerM * scaleX * lengthM) / p;
   const cb = j * 3;
   const ub = u * 3;
-  if (mask & 1) drop(s, cb, b, ub, 0, zr, zx, jr0 + nr, ji0 + ni);
-  if (mask & 2) drop(s, cb, b, ub, 1, zr, zx, jr1 + nr, ji1 + ni);
-  if (mask & 4) drop(s, cb, b, ub, 2, zr, zx, jr2 + nr, ji2 + ni);
+  if (mask & 1) drop(s, cb, b, ub, 0, zr, zx, jr0 + nr, ji0 + ni, phasors);
+  if (mask & 2) drop(s, cb, b, ub, 1, zr, zx, jr1 + nr, ji1 + ni, phasors);
+  if (mask & 4) drop(s, cb, b, ub, 2, zr, zx, jr2 + nr, ji2 + ni, phasors);
 }
 
 function drop(
@@ -164,12 +165,50 @@ function drop(
   zx: number,
   jr: number,
   ji: number,
+  phasors: boolean,
 ): void {
   const re = zr * jr - zx * ji;
   const im = zr * ji + zx * jr;
-  s.vRe[b + p] = (s.vRe[ub + p] as number) - re;
-  s.vIm[b + p] = (s.vIm[ub + p] as number) - im;
+  if (phasors) {
+    s.vRe[b + p] = (s.vRe[ub + p] as number) - re;
+    s.vIm[b + p] = (s.vIm[ub + p] as number) - im;
+  }
   s.dropProj[cb + p] = re * (PHASE_COS[p] as number) + im * (PHASE_SIN[p] as number);
+}
+
+/**
+ * The node voltage phasors (U0 ∠ phase angle minus the phasor drops down the path), worked out for
+ * the whole tree the first time a result asks for one: only the nodal check and a node's
+ * `voltagePhasorV` read them, so a solve does not carry them. The same walk and the same segment
+ * drops as the downward pass, so the same figures.
+ */
+export function voltagePhasors(s: DropState): { vRe: Float64Array; vIm: Float64Array } {
+  if (s.vRe.length === 0 && s.nodeCount > 0) {
+    const vRe = (s.vRe = new Float64Array(s.nodeCount * 3));
+    const vIm = (s.vIm = new Float64Array(s.nodeCount * 3));
+    if (s.root >= 0) {
+      const rb = s.root * 3;
+      for (let p = 0; p < 3; p++) {
+        vRe[rb + p] = s.u0V * (PHASE_COS[p] as number);
+        vIm[rb + p] = s.u0V * (PHASE_SIN[p] as number);
+      }
+      const { walk, parentCable, cableFrom, cableBad } = s;
+      for (let k = 1; k < s.orderLength; k++) {
+        const v = walk[k] as number;
+        const j = parentCable[v] as number;
+        const u = cableFrom[j] as number;
+        const b = v * 3;
+        const ub = u * 3;
+        // A phase the segment does not carry (or a segment not solved) drops nothing.
+        for (let p = 0; p < 3; p++) {
+          vRe[b + p] = vRe[ub + p] as number;
+          vIm[b + p] = vIm[ub + p] as number;
+        }
+        if (!cableBad[j]) segmentDrop(s, v, j, u, true);
+      }
+    }
+  }
+  return { vRe: s.vRe, vIm: s.vIm };
 }
 
 /**
@@ -177,17 +216,12 @@ function drop(
  * cumulative drop, voltage, route length and branch base at every node.
  */
 export function accumulate(s: DropState): void {
-  const { cum, vRe, vIm, dropProj, branchAt, walk, parentCable, cableFrom } = s;
+  const { cum, dropProj, branchAt, walk, parentCable, cableFrom } = s;
   const { nodeKind, cableBad, incomplete, pathLengthM, cableLengthM } = s;
   if (s.root < 0) return;
   s.nodePhases[s.root] = supplyMask(s);
   // The branch budget counts from the last board upstream, or from the origin (cumulative 0).
   branchAt[s.root] = s.root;
-  const rb = s.root * 3;
-  for (let p = 0; p < 3; p++) {
-    vRe[rb + p] = s.u0V * (PHASE_COS[p] as number);
-    vIm[rb + p] = s.u0V * (PHASE_SIN[p] as number);
-  }
   const tail = new FindingTail(s.findings);
   for (let k = 1; k < s.orderLength; k++) {
     const v = walk[k] as number;
@@ -199,14 +233,7 @@ export function accumulate(s: DropState): void {
     const ub = u * 3;
     const cb = j * 3;
     const bad = cableBad[j] as number;
-    // A phase the segment does not carry (or a segment not solved) drops nothing.
-    vRe[b] = vRe[ub] as number;
-    vRe[b + 1] = vRe[ub + 1] as number;
-    vRe[b + 2] = vRe[ub + 2] as number;
-    vIm[b] = vIm[ub] as number;
-    vIm[b + 1] = vIm[ub + 1] as number;
-    vIm[b + 2] = vIm[ub + 2] as number;
-    if (!bad) segmentDrop(s, v, j, u);
+    if (!bad) segmentDrop(s, v, j, u, false);
     const c0 = (cum[ub] as number) + (dropProj[cb] as number);
     const c1 = (cum[ub + 1] as number) + (dropProj[cb + 1] as number);
     const c2 = (cum[ub + 2] as number) + (dropProj[cb + 2] as number);

@@ -19,7 +19,7 @@ import type { DropState } from './dropState.ts';
 import { KIND_LOAD, cableRow } from './dropState.ts';
 import { PHASE_NAMES, dropMethod, pathTo, phasesOf, worstCablePhase, worstNodeCum } from './dropMethod.ts';
 import type { DropMethod } from './dropMethod.ts';
-import { cableIbA } from './flow.ts';
+import { cableIbA, voltagePhasors } from './flow.ts';
 import { STATUS_WORDS, loadPhaseMask } from './judge.ts';
 import { cableWorking, nodeWorking } from './working.ts';
 import { hypot } from './hypot.ts';
@@ -147,11 +147,12 @@ export class NodeResultView implements NodeResult {
     const volts: Partial<Record<Phase, number>> = {};
     const phasors: Partial<Record<Phase, { re: number; im: number }>> = {};
     const b = v * 3;
+    const { vRe, vIm } = mask ? voltagePhasors(s) : s;
     for (let p = 0; p < 3; p++) {
       if (!(mask & (1 << p))) continue;
       const name = PHASE_NAMES[p] as Phase;
       volts[name] = s.u0V - (s.cum[b + p] as number);
-      phasors[name] = { re: s.vRe[b + p] as number, im: s.vIm[b + p] as number };
+      phasors[name] = { re: vRe[b + p] as number, im: vIm[b + p] as number };
     }
     this.voltageV = volts;
     this.voltagePhasorV = phasors;

@@ -106,6 +106,8 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
     nodeIds,
     cableIds,
     rows: [undefined],
+    vRe: new Float64Array(0),
+    vIm: new Float64Array(0),
     orderLength: 0,
     root: -1,
     walkIsDocumentOrder: false,
