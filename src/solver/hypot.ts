@@ -6,13 +6,14 @@
  * the allocation: infinite if either part is, NaN if either is NaN, else never overflowing.
  * @example hypot(3, 4) // 5
  */
+const INF = Number.POSITIVE_INFINITY;
+
 export function hypot(re: number, im: number): number {
-  const x = re < 0 ? -re : re;
-  const y = im < 0 ? -im : im;
-  if (x === Infinity || y === Infinity) return Infinity;
-  if (re !== re || im !== im) return NaN;
+  const x = Math.abs(re);
+  const y = Math.abs(im);
   const max = x > y ? x : y;
-  if (max === 0) return 0;
+  // One test for the usual case; written so the optimiser keeps the result unboxed.
+  if (!(max > 0 && max < INF)) return x === INF || y === INF ? INF : re !== re || im !== im ? Number.NaN : 0;
   const p = x / max;
   const q = y / max;
   return Math.sqrt(p * p + q * q) * max;

@@ -11,6 +11,8 @@ import { shown } from './findings.ts';
 import { nodeLabel } from './topology.ts';
 import { FindingTail } from './findingOrder.ts';
 
+const INF = Number.POSITIVE_INFINITY;
+
 export const STATUS_WORDS = ['within', 'close', 'over'] as const;
 
 /** Phases a load is judged on, as a bit mask. */
@@ -38,7 +40,7 @@ export function judgeLoads(s: DropState): void {
       const bb = (branchAt[v] as number) * 3;
       const mask = loadPhaseMask(s, v);
       let worst = -1;
-      let worstPct = -Infinity;
+      let worstPct = Number.NEGATIVE_INFINITY;
       let branchWorst = 0;
       for (let p = 0; p < 3; p++) {
         if (!(mask & (1 << p))) continue;
@@ -128,17 +130,18 @@ function headroom(
   const mask = s.cablePhases[j] as number;
   const b = v * 3;
   const isBoard = s.nodeKind[v] === KIND_BOARD;
-  let factor = Infinity;
+  // Number.POSITIVE_INFINITY rather than the global Infinity: V8 then keeps `factor` unboxed.
+  let factor = INF;
   for (let p = 0; p < 3; p++) {
     if (!(mask & (1 << p))) continue;
     const d = (s.dropProj[j * 3 + p] as number) * pctPerV;
     if (!(d > 0)) continue;
     const a = slack[b + p] as number;
-    if (a !== Infinity) factor = Math.min(factor, (a + d) / d);
+    if (a !== INF) factor = Math.min(factor, (a + d) / d);
     if (slackB && !isBoard) {
       const c = slackB[b + p] as number;
-      if (c !== Infinity) factor = Math.min(factor, (c + d) / d);
+      if (c !== INF) factor = Math.min(factor, (c + d) / d);
     }
   }
-  if (factor !== Infinity) s.maxLengthM[j] = Math.max(0, (s.cableLengthM[j] as number) * factor);
+  if (factor !== INF) s.maxLengthM[j] = Math.max(0, (s.cableLengthM[j] as number) * factor);
 }

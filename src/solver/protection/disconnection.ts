@@ -63,11 +63,12 @@ export function operatingCurrentA(device: Device, requiredS: number, fuses: Fuse
     return INSTANTANEOUS_MULTIPLE[device.curve ?? 'B'] * device.ratingA;
   if (device.type === 'mccb') return (device.imMultiple ?? 10) * settingA(device);
   const row = fuseRow(fuses, device.ratingA);
-  if (!row) return NaN;
+  // Number.NaN rather than the global NaN: V8 then keeps the figure unboxed.
+  if (!row) return Number.NaN;
   if (requiredS === 5) return row.ia5sA;
   if (requiredS === 0.4) return row.ia04sA;
   if (requiredS > 0.4 && requiredS < 5) return fuseCurrentForTime(row.ia04sA, row.ia5sA, requiredS);
-  return NaN;
+  return Number.NaN;
 }
 
 /**

@@ -121,8 +121,9 @@ export function cableFindings(
   const tag = 2 * t.rank[v]!;
   const id = cable.id;
   const device = deviceOf(t.cables, a, j);
-  const inA = device ? settingA(device) : null;
-  if (device && inA !== null) {
+  // With no device there is no In (NaN here, never read); kept a plain number for the optimiser.
+  const inA = device ? settingA(device) : Number.NaN;
+  if (device) {
     out.requiredS = requiredDisconnectionS(
       supply.earthing,
       a.circuit[j] ? 'distribution' : 'final',
@@ -131,22 +132,17 @@ export function cableFindings(
     );
   }
   const ibA = t.drop ? cableIbA(t.drop, j) : t.ibA(j);
-  if (device && inA !== null && !(ibA <= inA))
+  if (device && !(ibA <= inA))
     out.fail(tag, 'ibIn', id, msg.ibInFailMessage(`cable ${cable.name}`, ibA, inA));
   const cap = memo.list[a.capAt[j]!]!;
   if ('error' in cap) {
     out.unknown(tag, id, msg.capacityErrorMessage(`cable ${cable.name}`, cap.error));
   } else {
     const izA = cap.izA;
-    const base = inA ?? ibA;
+    const base = device ? inA : ibA;
     if (!(base <= izA))
-      out.fail(
-        tag,
-        'inIz',
-        id,
-        msg.inIzFailMessage(`cable ${cable.name}`, inA === null ? 'Ib' : 'In', base, izA),
-      );
-    if (device && inA !== null) {
+      out.fail(tag, 'inIz', id, msg.inIzFailMessage(`cable ${cable.name}`, device ? 'In' : 'Ib', base, izA));
+    if (device) {
       const i2 = conventionalOperatingMultiple(device.type, inA) * inA;
       const lim = 1.45 * izA;
       if (!(i2 <= lim)) out.fail(tag, 'i2', id, msg.i2FailMessage(`cable ${cable.name}`, i2, lim));

@@ -67,7 +67,8 @@ const KINDS: Readonly<Record<string, number>> = {
 export function dropXOhmPerM(s: DropState, j: number, parallel: unknown): number {
   const row = cableRow(s, j);
   const n = typeof parallel === 'number' && parallel >= 1 ? parallel : 1;
-  return row ? (row.xOhmPerM * (row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1)) / n : NaN;
+  // Number.NaN rather than the global NaN: V8 then keeps the figure unboxed.
+  return row ? (row.xOhmPerM * (row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1)) / n : Number.NaN;
 }
 
 /** The drop solver's tree and figures, read from its arrays. */
