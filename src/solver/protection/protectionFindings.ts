@@ -26,8 +26,8 @@ import { KIND_LOAD, type TreeInputs } from './treeInputs.ts';
 import { cableIbA } from '../flow.ts';
 import { motorStartFor } from '../motorStart.ts';
 import { hypot } from '../hypot.ts';
-import { faultMaxA, nodeName, type PassArrays } from './passArrays.ts';
-import type { PassContext } from './protectionPass.ts';
+import { faultMaxA, nodeName, type Loops, type PassArrays } from './passArrays.ts';
+import type { PassContext, SegmentLoops } from './protectionPass.ts';
 
 /** Where the fuse data or the required time give no Ia (operatingCurrent answers with a reason). */
 export function iaUnknown(device: Device, requiredS: number, fuses: FuseDataSet): boolean {
@@ -59,6 +59,18 @@ export class Tagged {
   topology: Topology | undefined;
   /** The required disconnection time of the segment just checked, for its far node's check. */
   requiredS = 5;
+  /** The segment being walked and the loops at its far node (fields, so figures pass unboxed). */
+  readonly segment: SegmentLoops = { r1r2Hot: 0.5, r1r2Cold: 0.5, r1Cold: 0.5, xLen: 0.5 };
+  readonly loops: Loops = {
+    zhR: 0.5,
+    zhX: 0.5,
+    zcR: 0.5,
+    flR: 0.5,
+    flX: 0.5,
+    fpR: 0.5,
+    fpX: 0.5,
+    three: false,
+  };
   failed = 0;
   unassessed = 0;
   fail(tag: number, key: CheckKey, elementId: string, message: string): void {
@@ -151,10 +163,11 @@ export function cableFindings(
   const own = cable.device;
   if (own) {
     // The fault level at a sending end, worked out once per node: siblings share it.
-    let kA = a.sendingKa[u]!;
+    const r = a.slot[u]!;
+    let kA = a.sendingKa[r]!;
     if (kA !== kA) {
       kA = faultMaxA(a, u, u0V) / 1000;
-      a.sendingKa[u] = kA;
+      a.sendingKa[r] = kA;
     }
     if (!(own.breakingKa >= kA))
       out.fail(
@@ -166,7 +179,7 @@ export function cableFindings(
   }
   // Adiabatic check on the cpc at the far end's earth fault current.
   const byTable = conductor.byTable;
-  const earthFaultA = (CMIN * u0V) / hypot(a.zhR[v]!, a.zhX[v]!);
+  const earthFaultA = (CMIN * u0V) / hypot(out.loops.zhR, out.loops.zhX);
   const tS = device ? operatingTimeS(device, earthFaultA, fuses) : null;
   if (tS === null) {
     if (!byTable)
@@ -187,7 +200,7 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
   const { t, u0V, fuses, supply } = ctx;
   const tag = 2 * t.rank[v]! + 1;
   const nid = t.nodeIds[v]!;
-  const zsOhm = hypot(a.zhR[v]!, a.zhX[v]!);
+  const zsOhm = hypot(out.loops.zhR, out.loops.zhX);
   const device = deviceOf(t.cables, a, j);
   if (!device) out.unknown(tag, nid, zsMsg.zsNoDeviceMessage(nodeName(t.nodes[v], nid)));
   else {

@@ -18,8 +18,8 @@ import type { Check, MotorStartResult } from './protectionResults.ts';
 import type { SourceImpedance } from './impedance.ts';
 import { KIND_BOARD, KIND_JUNCTION, type TreeInputs } from './treeInputs.ts';
 import { dropXOhmPerM } from './treeInputs.ts';
-import { PassArrays } from './passArrays.ts';
-import { CapacityMemo } from './capacityMemo.ts';
+import { PassArrays, type Loops } from './passArrays.ts';
+import { CapacityMemo, type ConductorFigures } from './capacityMemo.ts';
 import { cableFindings, nodeFindings, Tagged } from './protectionFindings.ts';
 
 export interface PassContext {
@@ -55,14 +55,58 @@ function circuits(t: TreeInputs, a: PassArrays): void {
   }
 }
 
+/** What a segment adds to the loops at its sending end: R1 + R2 hot and cold, R1 cold, X, ohms. */
+export interface SegmentLoops {
+  r1r2Hot: number;
+  r1r2Cold: number;
+  r1Cold: number;
+  xLen: number;
+}
+
 /**
- * The walk: for each segment, what its cable contributes on its own (the same expressions as
- * segmentLoop: the per-metre figures of its conductors, from the memo, times its length over its
- * parallel count), the loop impedances at its far node, then the checks of both.
+ * What cable `j` contributes on its own (the same expressions as segmentLoop: the per-metre
+ * figures of its conductors, from the memo, times its length over its parallel count), into `seg`.
+ */
+export function segmentLoops(
+  t: TreeInputs,
+  cable: Cable,
+  j: number,
+  conductor: ConductorFigures,
+  seg: SegmentLoops,
+): void {
+  const n = Math.max(1, cable.parallel);
+  const lengthM = cable.lengthM;
+  seg.r1r2Hot = (conductor.r1r2HotPerM * lengthM) / n;
+  seg.r1r2Cold = (conductor.r1r2ColdPerM * lengthM) / n;
+  seg.r1Cold = (conductor.r1PerM * lengthM) / n;
+  // The reactance per metre already combines parallel cables; dividing again would understate X.
+  seg.xLen = (t.drop ? dropXOhmPerM(t.drop, j, cable.parallel) : t.xOhmPerM(j)) * lengthM;
+}
+
+/**
+ * The loops at the far node of cable `j`: those at its sending end `u` (kept) plus the segment's,
+ * into `at`. The earth loop is line out and cpc back: its reactance is taken as twice the line's.
+ */
+export function loopsBeyond(a: PassArrays, u: number, seg: SegmentLoops, at: Loops): void {
+  const r = a.slot[u]!;
+  at.zhR = a.zhR[r]! + seg.r1r2Hot;
+  at.zhX = a.zhX[r]! + 2 * seg.xLen;
+  at.zcR = a.zcR[r]! + seg.r1r2Cold;
+  at.flR = a.flR[r]! + 2 * seg.r1Cold;
+  at.flX = a.flX[r]! + 2 * seg.xLen;
+  at.fpR = a.fpR[r]! + seg.r1Cold;
+  at.fpX = a.fpX[r]! + seg.xLen;
+}
+
+/**
+ * The walk: for each segment, its own loops, the loops at its far node (kept where that node
+ * feeds others), then the checks of both (which read the far node's loops from `out.loops`).
  */
 function walkTree(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagged): void {
   const { t } = ctx;
-  const { walk, feeding, cableFrom, nodeKind, cableHasResult, cables, drop } = t;
+  const { walk, feeding, cableFrom, nodeKind, cableHasResult, cables } = t;
+  const seg = out.segment;
+  const at = out.loops;
   for (let k = t.orderStart; k < t.orderEnd; k++) {
     const v = walk[k]!;
     const j = feeding[v]!;
@@ -78,21 +122,18 @@ function walkTree(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagg
       out.noResistance(t, j, cable);
       continue;
     }
-    const n = Math.max(1, cable.parallel);
-    const lengthM = cable.lengthM;
-    const r1r2Hot = (conductor.r1r2HotPerM * lengthM) / n;
-    const r1r2Cold = (conductor.r1r2ColdPerM * lengthM) / n;
-    const r1Cold = (conductor.r1PerM * lengthM) / n;
-    // The reactance per metre already combines parallel cables; dividing again would understate X.
-    const xLen = (drop ? dropXOhmPerM(drop, j, cable.parallel) : t.xOhmPerM(j)) * lengthM;
-    // The earth loop is line out and cpc back: its reactance is taken as twice the line's.
-    a.zhR[v] = a.zhR[u]! + r1r2Hot;
-    a.zhX[v] = a.zhX[u]! + 2 * xLen;
-    a.zcR[v] = a.zcR[u]! + r1r2Cold;
-    a.flR[v] = a.flR[u]! + 2 * r1Cold;
-    a.flX[v] = a.flX[u]! + 2 * xLen;
-    a.fpR[v] = a.fpR[u]! + r1Cold;
-    a.fpX[v] = a.fpX[u]! + xLen;
+    segmentLoops(t, cable, j, conductor, seg);
+    loopsBeyond(a, u, seg, at);
+    const r = a.slot[v]!;
+    if (r >= 0) {
+      a.zhR[r] = at.zhR;
+      a.zhX[r] = at.zhX;
+      a.zcR[r] = at.zcR;
+      a.flR[r] = at.flR;
+      a.flX[r] = at.flX;
+      a.fpR[r] = at.fpR;
+      a.fpX[r] = at.fpX;
+    }
     a.three[v] = a.three[u] === 1 && cable.phases === 3 ? 1 : 0;
     a.acc[v] = 1;
     a.hasCable[j] = 1;
@@ -103,10 +144,24 @@ function walkTree(ctx: PassContext, a: PassArrays, memo: CapacityMemo, out: Tagg
   }
 }
 
+/** A place for the origin and every node that feeds a segment (PassArrays.slot), in walk order. */
+function slots(t: TreeInputs): { slot: Int32Array; count: number } {
+  const slot = new Int32Array(t.nodes.length).fill(-1);
+  let count = 0;
+  if (t.root >= 0) slot[t.root] = count++;
+  const { walk, feeding, cableFrom } = t;
+  for (let k = t.orderStart; k < t.orderEnd; k++) {
+    const u = cableFrom[feeding[walk[k]!]!]!;
+    if (slot[u]! < 0) slot[u] = count++;
+  }
+  return { slot, count };
+}
+
 /** Runs the sweeps; findings for failed and unassessed checks are appended in breadth-first order. */
 export function protectionPass(ctx: PassContext, findings: Finding[]): PassOutcome {
   const { t } = ctx;
-  const a = new PassArrays(t.nodes.length, t.cables.length);
+  const places = slots(t);
+  const a = new PassArrays(t.nodes.length, t.cables.length, places.slot, places.count);
   const out = new Tagged();
   const memo = new CapacityMemo(ctx.tables);
   if (t.root < 0) return { a, memo, failed: 0, unassessed: 0, motors: out.motors };

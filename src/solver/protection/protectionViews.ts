@@ -22,7 +22,8 @@ import { zsChecks } from './zsCheck.ts';
 import { segmentLoop, type SourceImpedance } from './impedance.ts';
 import { pfcWorking, r1r2Working, zsWorking } from './protectionWorking.ts';
 import type { TreeInputs } from './treeInputs.ts';
-import { faultLevelAt, faultMaxA, nodeName, type PassArrays } from './passArrays.ts';
+import { faultLevelOf, faultMaxA, nodeName, type Loops, type PassArrays } from './passArrays.ts';
+import { loopsBeyond, segmentLoops, type SegmentLoops } from './protectionPass.ts';
 import { hypot } from '../hypot.ts';
 import type { CapacityMemo } from './capacityMemo.ts';
 import { operatingCurrentA, requiredDisconnectionS } from './disconnection.ts';
@@ -43,6 +44,22 @@ export interface ViewContext {
 function deviceOf(c: ViewContext, j: number) {
   const by = c.a.protBy[j]!;
   return by >= 0 ? (c.t.cables[by]!.device ?? null) : null;
+}
+
+/**
+ * The loops at node `v`: kept where it feeds segments, else its parent's plus its own segment (the
+ * same expressions as the pass's walk, so the same figures).
+ */
+function loopsAt(c: ViewContext, v: number): Loops {
+  const { a, t } = c;
+  if (a.slot[v]! >= 0) return a.kept(v);
+  const j = t.feeding[v]!;
+  const cable = t.cables[j]!;
+  const seg: SegmentLoops = { r1r2Hot: 0, r1r2Cold: 0, r1Cold: 0, xLen: 0 };
+  segmentLoops(t, cable, j, c.memo.conductor(cable), seg);
+  const at: Loops = { zhR: 0, zhX: 0, zcR: 0, flR: 0, flX: 0, fpR: 0, fpX: 0, three: a.three[v] === 1 };
+  loopsBeyond(a, t.cableFrom[j]!, seg, at);
+  return at;
 }
 
 /** The disconnection time segment `j`'s circuit needs with its device (as the pass decided it). */
@@ -121,7 +138,8 @@ export class CableProtectionView implements CableProtection {
         checks.push(breakingCheck(cable, cable.device, maxA, sendingEnd(cable.name)));
       }
       const v = t.cableTo[j]!;
-      const earthFaultA = (CMIN * u0V) / hypot(a.zhR[v]!, a.zhX[v]!);
+      const far = loopsAt(this.#c, v);
+      const earthFaultA = (CMIN * u0V) / hypot(far.zhR, far.zhX);
       checks.push(cpcCheck(cable, this.device, earthFaultA, fuses));
       this.#checks = checks;
     }
@@ -164,10 +182,11 @@ export class NodeProtectionView implements NodeProtection {
   #working: Working[] | undefined;
 
   constructor(c: ViewContext, v: number) {
-    const { a, t, u0V, fuses } = c;
+    const { t, u0V, fuses } = c;
     this.#c = c;
     this.#v = v;
-    const zsOhm = hypot(a.zhR[v]!, a.zhX[v]!);
+    const loops = loopsAt(c, v);
+    const zsOhm = hypot(loops.zhR, loops.zhX);
     // Zs max for the protecting device, as the pass's node check works it out.
     const j = v === t.root ? -1 : t.feeding[v]!;
     const device = j >= 0 ? deviceOf(c, j) : null;
@@ -177,13 +196,13 @@ export class NodeProtectionView implements NodeProtection {
         ? (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses)
         : null;
     this.zsOhm = zsOhm;
-    this.zs = { rOhm: a.zhR[v]!, xOhm: a.zhX[v]! };
+    this.zs = { rOhm: loops.zhR, xOhm: loops.zhX };
     // The cold loop has the hot loop's reactance.
-    this.zsColdOhm = hypot(a.zcR[v]!, a.zhX[v]!);
+    this.zsColdOhm = hypot(loops.zcR, loops.zhX);
     this.zsMaxOhm = zsMax;
     this.testZsMaxOhm = zsMax === null ? null : TEST_ZS_FACTOR * zsMax;
     this.earthFaultA = (CMIN * u0V) / zsOhm;
-    this.fault = faultLevelAt(a, v, u0V);
+    this.fault = faultLevelOf(loops, u0V);
   }
 
   /** Zs against the device's maximum, the TT touch-voltage condition and a motor's starting dip. */
