@@ -50,7 +50,39 @@ export class RowMemo {
     return this.rows.length - 1;
   }
 
+  /** Sizes met so far (a few standard ones), their position the size's id. */
+  private readonly sizes: number[] = [];
+  /** Row position + 1 by material, insulation, construction and size id (0: not looked up yet). */
+  private readonly byCode = new Int32Array(2 * 2 * 4 * 64);
+
   find(material: unknown, insulation: unknown, construction: unknown, sizeMm2: unknown): number {
+    // The usual types by code and a short scan of the sizes met: no hashing per cable.
+    const mat = material === 'Cu' ? 0 : material === 'Al' ? 1 : -1;
+    const ins = insulation === 'thermoplastic70' ? 0 : insulation === 'thermosetting90' ? 1 : -1;
+    const con =
+      construction === 'multicore'
+        ? 0
+        : construction === 'armouredMulticore'
+          ? 1
+          : construction === 'flatTwinEarth'
+            ? 2
+            : construction === 'singleCore'
+              ? 3
+              : -1;
+    if (mat >= 0 && ins >= 0 && con >= 0 && typeof sizeMm2 === 'number' && sizeMm2 === sizeMm2) {
+      const sizes = this.sizes;
+      let id = 0;
+      while (id < sizes.length && sizes[id] !== sizeMm2) id++;
+      if (id < 64) {
+        if (id === sizes.length) sizes.push(sizeMm2);
+        const code = ((mat * 2 + ins) * 4 + con) * 64 + id;
+        const held = this.byCode[code]!;
+        if (held > 0) return held - 1;
+        const at = this.add(findConductor(this.set, material, insulation, construction, sizeMm2));
+        this.byCode[code] = at + 1;
+        return at;
+      }
+    }
     if (
       typeof material !== 'string' ||
       typeof insulation !== 'string' ||
