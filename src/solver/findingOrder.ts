@@ -17,6 +17,11 @@ export class FindingTail {
     this.seen = findings.length;
   }
 
+  /** How many findings there were at the last `tag`. */
+  get seenCount(): number {
+    return this.seen;
+  }
+
   /** Marks the findings pushed since the last call as belonging to node `v`. */
   tag(v: number): void {
     if (this.findings.length === this.seen) return;

@@ -7,7 +7,7 @@
 import { longRunAllowancePct } from '../catalogue/limits.ts';
 import type { DropState } from './dropState.ts';
 import { KIND_BOARD, KIND_LOAD } from './dropState.ts';
-import { shown } from './findings.ts';
+import { flattenMessages, shown } from './findings.ts';
 import { nodeLabel } from './topology.ts';
 import { FindingTail } from './findingOrder.ts';
 
@@ -101,6 +101,8 @@ export function judgeLoads(s: DropState): void {
           });
       }
     }
+    // Each message joined while its parts are still in cache (see flattenMessages).
+    if (findings.length > tail.seenCount) flattenMessages(findings, tail.seenCount);
     tail.tag(v);
     const j = parentCable[v] as number;
     if (v === root || j < 0) continue;

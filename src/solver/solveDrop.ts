@@ -21,7 +21,7 @@ import type { CableResult, LoadResult, NodeResult, Results } from './results.ts'
 import type { DropState } from './dropState.ts';
 import { KIND_INVALID, KIND_LOAD, allocateArrays } from './dropState.ts';
 import type { DropFinding } from './findings.ts';
-import { flattenMessages, shown } from './findings.ts';
+import { shown } from './findings.ts';
 import { buildTopology, nodeLabel } from './topology.ts';
 import { validateCables, validateNodes } from './validateElements.ts';
 import { phaseIgnoredFindings } from './phases.ts';
@@ -254,7 +254,6 @@ export function solveDrop(doc: ProjectDocument, catalogue?: CatalogueSet): Resul
     phaseIgnoredFindings(s);
     accumulate(s);
     judgeLoads(s);
-    flattenMessages(findings);
     const results = buildResults(s);
     STATE_OF.set(results, s);
     return results;
