@@ -49,8 +49,9 @@ function motorTopology(t: TreeInputs): Topology {
 }
 
 /**
- * Findings with the breadth-first position they belong at (2 x rank for a cable's, 2 x rank + 1
- * for its far node's), the counts, and the motor starting results met on the way.
+ * Findings with the element they belong to (2 x v for the segment into node v, 2 x v + 1 for v
+ * itself), put at their breadth-first position (2 x rank + 0 or 1) when sorted; the counts, and the
+ * motor starting results met on the way.
  */
 export class Tagged {
   readonly list: Finding[] = [];
@@ -73,39 +74,42 @@ export class Tagged {
   };
   failed = 0;
   unassessed = 0;
-  fail(tag: number, key: CheckKey, elementId: string, message: string): void {
+  fail(place: number, key: CheckKey, elementId: string, message: string): void {
     this.failed++;
-    this.push(tag, { code: FAIL_CODES[key], severity: 'error', elementId, message });
+    this.push(place, { code: FAIL_CODES[key], severity: 'error', elementId, message });
   }
-  unknown(tag: number, elementId: string, message: string): void {
+  unknown(place: number, elementId: string, message: string): void {
     this.unassessed++;
-    this.push(tag, { code: 'checkNotAssessed', severity: 'warning', elementId, message });
+    this.push(place, { code: 'checkNotAssessed', severity: 'warning', elementId, message });
   }
-  push(tag: number, f: Finding): void {
+  push(place: number, f: Finding): void {
     this.list.push(f);
-    this.tags.push(tag);
+    this.tags.push(place);
     // As each message is made, so its parts are garbage at once.
     flattenMessages(this.list, this.list.length - 1);
   }
   /** A reached segment whose conductor or cpc IEC 60228 does not list: no figures, one warning. */
   noResistance(t: TreeInputs, j: number, cable: Cable): void {
-    this.push(2 * t.rank[t.cableTo[j]!]!, {
+    this.push(2 * t.cableTo[j]!, {
       code: 'noResistance',
       severity: 'warning',
       elementId: cable.id,
       message: `cable ${cable.name}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
     });
   }
-  /** A stable counting sort by tag onto `out`. */
-  appendSorted(out: Finding[], tagCount: number): void {
+  /** A stable counting sort by breadth-first position onto `out` (`rank`: each node's). */
+  appendSorted(out: Finding[], rank: Int32Array, tagCount: number): void {
     const n = this.list.length;
     if (n === 0) return;
+    const tags = this.tags;
+    // The element each finding belongs to, turned into its position: read for findings only.
+    for (let i = 0; i < n; i++) tags[i] = 2 * rank[tags[i]! >> 1]! + (tags[i]! & 1);
     const start = new Int32Array(tagCount + 1);
-    for (let i = 0; i < n; i++) start[this.tags[i]! + 1]!++;
+    for (let i = 0; i < n; i++) start[tags[i]! + 1]!++;
     for (let k = 0; k < tagCount; k++) start[k + 1]! += start[k]!;
     const base = out.length;
     out.length = base + n;
-    for (let i = 0; i < n; i++) out[base + start[this.tags[i]!]!++] = this.list[i]!;
+    for (let i = 0; i < n; i++) out[base + start[tags[i]!]!++] = this.list[i]!;
   }
 }
 
@@ -130,7 +134,7 @@ export function cableFindings(
   conductor: ConductorFigures,
 ): void {
   const { t, u0V, fuses, supply } = ctx;
-  const tag = 2 * t.rank[v]!;
+  const tag = 2 * v;
   const id = cable.id;
   const device = deviceOf(t.cables, a, j);
   // With no device there is no In (NaN here, never read); kept a plain number for the optimiser.
@@ -198,11 +202,10 @@ export function cableFindings(
 /** Far node `v` of segment `j`: Zs against the device's maximum (zsChecks), TT touch voltage, motor dip. */
 export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: number, v: number): void {
   const { t, u0V, fuses, supply } = ctx;
-  const tag = 2 * t.rank[v]! + 1;
-  const nid = t.nodeIds[v]!;
+  const tag = 2 * v + 1;
   const zsOhm = hypot(out.loops.zhR, out.loops.zhX);
   const device = deviceOf(t.cables, a, j);
-  if (!device) out.unknown(tag, nid, zsMsg.zsNoDeviceMessage(nodeName(t.nodes[v], nid)));
+  if (!device) out.unknown(tag, t.nodeIds[v]!, zsMsg.zsNoDeviceMessage(nodeName(t.nodes[v], t.nodeIds[v]!)));
   else {
     const requiredS = out.requiredS;
     const rcd = device.rcd;
@@ -211,28 +214,43 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
       const pass = rcdLimit !== null ? zsOhm <= rcdLimit : null;
       if (pass !== true) {
         const ia = operatingCurrent(device, requiredS, fuses);
-        const text = zsMsg.zsIaErrorMessage(nodeName(t.nodes[v], nid), 'error' in ia ? ia.error : '');
-        if (pass === false) out.fail(tag, 'zs', nid, text);
-        else out.unknown(tag, nid, text);
+        const text = zsMsg.zsIaErrorMessage(
+          nodeName(t.nodes[v], t.nodeIds[v]!),
+          'error' in ia ? ia.error : '',
+        );
+        if (pass === false) out.fail(tag, 'zs', t.nodeIds[v]!, text);
+        else out.unknown(tag, t.nodeIds[v]!, text);
       }
     } else {
       const zsMax = (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses);
       const ok = zsOhm <= zsMax || (rcdLimit !== null && zsOhm <= rcdLimit);
       if (!ok)
-        out.fail(tag, 'zs', nid, zsMsg.zsFailMessage(nodeName(t.nodes[v], nid), zsOhm, zsMax, requiredS));
+        out.fail(
+          tag,
+          'zs',
+          t.nodeIds[v]!,
+          zsMsg.zsFailMessage(nodeName(t.nodes[v], t.nodeIds[v]!), zsOhm, zsMax, requiredS),
+        );
     }
     if (supply.earthing === 'TT') {
       const ra = supply.raOhm;
-      if (!rcd || !(rcd.idnMa > 0)) out.unknown(tag, nid, zsMsg.ttNoRcdMessage(nodeName(t.nodes[v], nid)));
-      else if (ra === undefined) out.unknown(tag, nid, zsMsg.ttNoRaMessage(nodeName(t.nodes[v], nid)));
+      if (!rcd || !(rcd.idnMa > 0))
+        out.unknown(tag, t.nodeIds[v]!, zsMsg.ttNoRcdMessage(nodeName(t.nodes[v], t.nodeIds[v]!)));
+      else if (ra === undefined)
+        out.unknown(tag, t.nodeIds[v]!, zsMsg.ttNoRaMessage(nodeName(t.nodes[v], t.nodeIds[v]!)));
       else {
         const volts = ra * (rcd.idnMa / 1000);
         if (!(volts <= 50))
-          out.fail(tag, 'rcdTouch', nid, zsMsg.ttFailMessage(nodeName(t.nodes[v], nid), volts));
+          out.fail(
+            tag,
+            'rcdTouch',
+            t.nodeIds[v]!,
+            zsMsg.ttFailMessage(nodeName(t.nodes[v], t.nodeIds[v]!), volts),
+          );
       }
     }
   }
-  if (t.loadMotor[v] && t.nodeKind[v] === KIND_LOAD && ctx.results.loads[nid]) {
+  if (t.loadMotor[v] && t.nodeKind[v] === KIND_LOAD && ctx.results.loads[t.nodeIds[v]!]) {
     const motor = motorStartFor(
       t.nodes[v] as Load,
       ctx.results,
@@ -242,8 +260,8 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
     );
     if (motor) {
       out.motors.set(v, motor);
-      if (motor.check.pass === false) out.fail(tag, 'motorDip', nid, motor.check.message);
-      else if (motor.check.pass === null) out.unknown(tag, nid, motor.check.message);
+      if (motor.check.pass === false) out.fail(tag, 'motorDip', t.nodeIds[v]!, motor.check.message);
+      else if (motor.check.pass === null) out.unknown(tag, t.nodeIds[v]!, motor.check.message);
     }
   }
 }

@@ -169,6 +169,6 @@ export function protectionPass(ctx: PassContext, findings: Finding[]): PassOutco
   a.hasNode[t.root] = 1;
   circuits(t, a);
   walkTree(ctx, a, memo, out);
-  out.appendSorted(findings, 2 * t.orderEnd + 2);
+  out.appendSorted(findings, t.rank, 2 * t.orderEnd + 2);
   return { a, memo, failed: out.failed, unassessed: out.unassessed, motors: out.motors };
 }
