@@ -1,6 +1,6 @@
 /** Small shared readers over the solver state, used by result objects and working records. */
 import type { Phase } from '../model/types.ts';
-import type { DropState } from './dropState.ts';
+import { dropCurrentScale, type DropState } from './dropState.ts';
 import { hypot } from './hypot.ts';
 
 export type DropMethod = 'singlePhaseLoop' | 'balancedThreePhase' | 'unbalancedThreePhase';
@@ -23,7 +23,8 @@ export function dropMethod(s: DropState, j: number): DropMethod {
   let ib = 0;
   for (let p = 0; p < 3; p++)
     ib = Math.max(ib, hypot(s.iRe[v * 3 + p] as number, s.iIm[v * 3 + p] as number));
-  const scale = s.dropIScale[j] === 0 ? 1 : (s.dropIScale[j] as number);
+  const kept = dropCurrentScale(s, j);
+  const scale = kept === 0 ? 1 : kept;
   const neutral = hypot(s.nRe[j] as number, s.nIm[j] as number);
   // A rounding residue of a balanced set is ~1e-15 of the phase current.
   return neutral <= 1e-9 * Math.max(ib * scale, 1e-9) ? 'balancedThreePhase' : 'unbalancedThreePhase';

@@ -85,7 +85,11 @@ export interface DropState {
   /** Demand current phasor flowing into each node, per phase. */
   iRe: Float64Array;
   iIm: Float64Array;
-  /** Current used for the drop (differs from the demand when the In basis applies), per phase. */
+  /**
+   * Scale from the demand current to the one the drop is worked out with (the In basis; 0 where
+   * the rating itself is used), per cable; empty when the settings use the demand, where it is 1
+   * (read it through dropCurrentScale).
+   */
   dropIScale: Float64Array;
   /** Neutral (return) current phasor on each cable. */
   nRe: Float64Array;
@@ -197,6 +201,11 @@ class Slab {
 
 export type DropArrays = ReturnType<typeof layout>;
 
+/** The scale of cable `j`'s drop current (DropState.dropIScale): 1 on the demand basis. */
+export function dropCurrentScale(s: DropState, j: number): number {
+  return s.useDeviceRating ? (s.dropIScale[j] as number) : 1;
+}
+
 /**
  * A load's typed demand fields are read only until its current is set (the upward pass); the
  * judge's slack is needed only after that. So the two share one region of the buffer.
@@ -210,7 +219,7 @@ function loadFields(region: Float64Array, n: number) {
   };
 }
 
-function layout(a: Slab, n: number, m: number) {
+function layout(a: Slab, n: number, m: number, useDeviceRating: boolean) {
   return {
     nodeKind: a.u8(n).fill(KIND_INVALID),
     parentCable: a.i32(n).fill(-1),
@@ -231,7 +240,7 @@ function layout(a: Slab, n: number, m: number) {
     diversity: a.f64(n).fill(1),
     iRe: a.f64(n * 3),
     iIm: a.f64(n * 3),
-    dropIScale: a.f64(m).fill(1),
+    dropIScale: a.f64(useDeviceRating ? m : 0).fill(1),
     nRe: a.f64(m),
     nIm: a.f64(m),
     dropProj: a.f64(m * 3),
@@ -263,10 +272,10 @@ function layout(a: Slab, n: number, m: number) {
 }
 
 /** Every typed array of a state for `n` nodes and `m` cables, carved from one buffer. */
-export function allocateArrays(n: number, m: number): DropArrays {
+export function allocateArrays(n: number, m: number, useDeviceRating: boolean): DropArrays {
   const measure = new Slab(undefined);
-  layout(measure, n, m);
-  return layout(new Slab(new ArrayBuffer(measure.bytes)), n, m);
+  layout(measure, n, m, useDeviceRating);
+  return layout(new Slab(new ArrayBuffer(measure.bytes)), n, m, useDeviceRating);
 }
 
 /** The conductor row of cable `j`, or undefined where the data set has none. */

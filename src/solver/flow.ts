@@ -105,7 +105,7 @@ function segmentDrop(s: DropState, v: number, j: number, u: number, phasors: boo
     if (ib > 0) scale = rating / ib;
     else atRating = rating;
   }
-  s.dropIScale[j] = atRating > 0 ? 0 : scale;
+  if (s.useDeviceRating) s.dropIScale[j] = atRating > 0 ? 0 : scale;
   let jr0 = 0;
   let ji0 = 0;
   let jr1 = 0;

@@ -112,7 +112,7 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
     root: -1,
     walkIsDocumentOrder: false,
     rankReady: false,
-    ...allocateArrays(n, m),
+    ...allocateArrays(n, m, read.useDeviceRating),
   };
 }
 

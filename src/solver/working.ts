@@ -5,7 +5,7 @@
  */
 import type { Working, WorkingInput } from './results.ts';
 import type { DropState } from './dropState.ts';
-import { KIND_BOARD, KIND_LOAD, cableRow } from './dropState.ts';
+import { KIND_BOARD, KIND_LOAD, cableRow, dropCurrentScale } from './dropState.ts';
 import { PHASE_NAMES, dropMethod, pathTo, phasesOf, worstCablePhase, worstNodeCum } from './dropMethod.ts';
 import { cableIbA, deviceRatingA } from './flow.ts';
 import { loadPhaseMask } from './judge.ts';
@@ -175,7 +175,8 @@ function dropRecord(s: DropState, j: number, ib: number): Working {
       unit: 'A',
       source: `${field('cable', id, 'device.ratingA')} (settings designCurrentBasis = In: the currents are scaled so the worst phase carries In)`,
     });
-  const scale = s.dropIScale[j] === 0 ? 1 : (s.dropIScale[j] as number);
+  const kept = dropCurrentScale(s, j);
+  const scale = kept === 0 ? 1 : kept;
   const p = worstCablePhase(s, j);
   const proj = p >= 0 ? (s.dropProj[j * 3 + p] as number) : 0;
   if (method === 'singlePhaseLoop') {
