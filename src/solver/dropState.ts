@@ -112,12 +112,11 @@ export interface DropState {
    */
   branchAt: Int32Array;
 
-  /** Per load: worst relevant phase, cumulative % of U0, limit %, budget used; status -1 none, 0..2. */
+  /**
+   * Per load: worst relevant phase; status -1 none, 0..2. Its cumulative %, limit, branch drop and
+   * budget used are worked out again when a result is built (loadVerdict in judge.ts).
+   */
   worstPhase: Int8Array;
-  loadCumPct: Float64Array;
-  loadLimitPct: Float64Array;
-  loadBranchPct: Float64Array;
-  budgetUsed: Float64Array;
   status: Int8Array;
   /** Per cable: longest length keeping every judged load below within its limit; NaN = none. */
   maxLengthM: Float64Array;
@@ -248,10 +247,6 @@ function layout(a: Slab, n: number, m: number, useDeviceRating: boolean) {
     pathLengthM: a.f64(n),
     branchAt: a.i32(n),
     worstPhase: a.i8(n).fill(-1),
-    loadCumPct: a.f64(n),
-    loadLimitPct: a.f64(n),
-    loadBranchPct: a.f64(n),
-    budgetUsed: a.f64(n),
     status: a.i8(n).fill(-1),
     maxLengthM: a.f64(m).fill(NaN),
     nodeCheck: a.u8(n),

@@ -20,6 +20,79 @@ export function loadPhaseMask(s: DropState, v: number): number {
   return (s.loadMask[v] as number) || 1;
 }
 
+/** A load's judged figures: worst phase, cumulative and branch drop (% of U0), limit, budget used. */
+export interface LoadVerdict {
+  worst: number;
+  worstPct: number;
+  branchWorst: number;
+  limit: number;
+  used: number;
+  category: 'lighting' | 'other';
+}
+
+/**
+ * The figures the judge gives reached load `v`, into `out`; the results work them out again with
+ * this when built instead of the state keeping four figures per node. Zero for a load not reached.
+ */
+export function loadVerdict(s: DropState, v: number, out: LoadVerdict): void {
+  const { profile, cum } = s;
+  const categoryCode = s.loadCategory[v];
+  out.category = categoryCode === 1 ? 'other' : 'lighting';
+  if (!s.reached[v]) {
+    out.worst = -1;
+    out.worstPct = 0;
+    out.branchWorst = 0;
+    out.limit = 0;
+    out.used = 0;
+    return;
+  }
+  const pctPerV = 100 / s.u0V;
+  const branchLimit = profile.branchPct;
+  const b = v * 3;
+  // Cumulative drop at the last board upstream (0 at the origin), per phase.
+  const bb = (s.branchAt[v] as number) * 3;
+  const mask = loadPhaseMask(s, v);
+  let worst = -1;
+  let worstPct = Number.NEGATIVE_INFINITY;
+  let branchWorst = 0;
+  for (let p = 0; p < 3; p++) {
+    if (!(mask & (1 << p))) continue;
+    const pct = (cum[b + p] as number) * pctPerV;
+    if (pct > worstPct) {
+      worstPct = pct;
+      worst = p;
+    }
+    const br = ((cum[b + p] as number) - (cum[bb + p] as number)) * pctPerV;
+    if (br > branchWorst) branchWorst = br;
+  }
+  const allowance =
+    profile.allowsLongRunAllowance && s.longRunAllowance
+      ? longRunAllowancePct(s.pathLengthM[v] as number)
+      : 0;
+  const limit = (profile.totalPct[out.category] ?? 3) + allowance;
+  let used = worstPct / limit;
+  if (branchLimit !== undefined) used = Math.max(used, branchWorst / branchLimit);
+  out.worst = worst;
+  out.worstPct = worstPct;
+  out.branchWorst = branchWorst;
+  out.limit = limit;
+  out.used = used;
+}
+
+/** loadVerdict into a new record, for the results. */
+export function judged(s: DropState, v: number): LoadVerdict {
+  const out: LoadVerdict = {
+    worst: -1,
+    worstPct: 0,
+    branchWorst: 0,
+    limit: 0,
+    used: 0,
+    category: 'lighting',
+  };
+  loadVerdict(s, v, out);
+  return out;
+}
+
 export function judgeLoads(s: DropState): void {
   const { findings, profile } = s;
   const pctPerV = 100 / s.u0V;
@@ -31,6 +104,14 @@ export function judgeLoads(s: DropState): void {
   const { walk, nodeKind, cum, branchAt, parentCable, cableFrom, status, loadCategory } = s;
   const root = s.root;
   const tail = new FindingTail(findings);
+  const verdict: LoadVerdict = {
+    worst: -1,
+    worstPct: 0.5,
+    branchWorst: 0.5,
+    limit: 0.5,
+    used: 0.5,
+    category: 'lighting',
+  };
 
   for (let k = s.orderLength - 1; k >= 0; k--) {
     const v = walk[k] as number;
@@ -39,40 +120,16 @@ export function judgeLoads(s: DropState): void {
       // Cumulative drop at the last board upstream (0 at the origin), per phase.
       const bb = (branchAt[v] as number) * 3;
       const mask = loadPhaseMask(s, v);
-      let worst = -1;
-      let worstPct = Number.NEGATIVE_INFINITY;
-      let branchWorst = 0;
-      for (let p = 0; p < 3; p++) {
-        if (!(mask & (1 << p))) continue;
-        const pct = (cum[b + p] as number) * pctPerV;
-        if (pct > worstPct) {
-          worstPct = pct;
-          worst = p;
-        }
-        const br = ((cum[b + p] as number) - (cum[bb + p] as number)) * pctPerV;
-        if (br > branchWorst) branchWorst = br;
-      }
-      const categoryCode = loadCategory[v];
-      const category: 'lighting' | 'other' = categoryCode === 1 ? 'other' : 'lighting';
-      if (categoryCode === 2)
+      loadVerdict(s, v, verdict);
+      const { worst, worstPct, branchWorst, limit, used, category } = verdict;
+      if (loadCategory[v] === 2)
         findings.push({
           code: 'badCategory',
           severity: 'warning',
           elementId: s.nodeIds[v] as string,
           message: `${nodeLabel(s, v)}: category must be lighting or other, got ${shown((s.nodes[v] as { category?: unknown }).category)}; it is judged against the stricter lighting limit.`,
         });
-      const allowance =
-        profile.allowsLongRunAllowance && s.longRunAllowance
-          ? longRunAllowancePct(s.pathLengthM[v] as number)
-          : 0;
-      const limit = (profile.totalPct[category] ?? 3) + allowance;
-      let used = worstPct / limit;
-      if (branchLimit !== undefined) used = Math.max(used, branchWorst / branchLimit);
       s.worstPhase[v] = worst;
-      s.loadCumPct[v] = worstPct;
-      s.loadLimitPct[v] = limit;
-      s.loadBranchPct[v] = branchWorst;
-      s.budgetUsed[v] = used;
       if (s.incomplete[v] || !s.loadValid[v]) {
         s.status[v] = -1;
       } else {

@@ -20,7 +20,7 @@ import { KIND_LOAD, cableRow } from './dropState.ts';
 import { PHASE_NAMES, dropMethod, pathTo, phasesOf, worstCablePhase, worstNodeCum } from './dropMethod.ts';
 import type { DropMethod } from './dropMethod.ts';
 import { cableIbA, voltagePhasors } from './flow.ts';
-import { STATUS_WORDS, loadPhaseMask } from './judge.ts';
+import { STATUS_WORDS, judged, loadPhaseMask } from './judge.ts';
 import { cableWorking, nodeWorking } from './working.ts';
 import { hypot } from './hypot.ts';
 
@@ -187,12 +187,13 @@ export class LoadResultView extends NodeResultView implements LoadResult {
 
   constructor(s: DropState, v: number) {
     super(s, v);
-    this.limitPct = { value: s.loadLimitPct[v] as number, basis: 'U0', basisV: s.u0V };
-    this.budgetUsed = this.solved ? (s.budgetUsed[v] as number) : NaN;
+    const verdict = judged(s, v);
+    this.limitPct = { value: verdict.limit, basis: 'U0', basisV: s.u0V };
+    this.budgetUsed = this.solved ? verdict.used : NaN;
     if (s.profile.branchPct !== undefined && this.solved)
-      this.branchDropPct = { value: s.loadBranchPct[v] as number, basis: 'U0', basisV: s.u0V };
+      this.branchDropPct = { value: verdict.branchWorst, basis: 'U0', basisV: s.u0V };
     const p = Math.max(0, s.worstPhase[v] as number);
-    const total = s.loadCumPct[v] as number;
+    const total = verdict.worstPct;
     this.shares = pathTo(s, v).map((j) => {
       const dropPct = ((s.dropProj[j * 3 + p] as number) / s.u0V) * 100;
       return { cableId: s.cableIds[j] as string, dropPct, share: total > 0 ? dropPct / total : 0 };

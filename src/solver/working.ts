@@ -8,7 +8,7 @@ import type { DropState } from './dropState.ts';
 import { KIND_BOARD, KIND_LOAD, cableRow, dropCurrentScale } from './dropState.ts';
 import { PHASE_NAMES, dropMethod, pathTo, phasesOf, worstCablePhase, worstNodeCum } from './dropMethod.ts';
 import { cableIbA, deviceRatingA } from './flow.ts';
-import { loadPhaseMask } from './judge.ts';
+import { judged, loadPhaseMask } from './judge.ts';
 import { longRunAllowancePct } from '../catalogue/limits.ts';
 import { hypot } from './hypot.ts';
 
@@ -351,6 +351,7 @@ function loadCurrentRecord(s: DropState, v: number): Working {
 }
 
 function loadRecords(s: DropState, v: number, path: number[]): Working[] {
+  const verdict = judged(s, v);
   const id = s.nodeIds[v] as string;
   const el = s.nodes[v] as unknown as Record<string, unknown>;
   const profile = s.profile;
@@ -391,18 +392,18 @@ function loadRecords(s: DropState, v: number, path: number[]): Working[] {
               },
               {
                 name: 'branch drop',
-                value: s.loadBranchPct[v] as number,
+                value: verdict.branchWorst,
                 unit: '% of U0',
                 source: 'drop from the last board upstream',
               },
             ]
           : []),
       ],
-      result: { value: s.loadLimitPct[v] as number, unit: '% of U0' },
+      result: { value: verdict.limit, unit: '% of U0' },
       note: profile.note,
     },
   ];
-  const total = s.loadCumPct[v] as number;
+  const total = verdict.worstPct;
   const p = Math.max(0, s.worstPhase[v] as number);
   out.push({
     key: 'shares',
@@ -422,7 +423,7 @@ function loadRecords(s: DropState, v: number, path: number[]): Working[] {
     title: 'Status',
     formula: `over when budget used > 1; close when ≥ ${s.closeThreshold}; else within (budget used = cumulative / limit${profile.branchPct !== undefined ? ', or branch drop / branch limit if larger' : ''})`,
     inputs: [
-      { name: 'budget used', value: s.budgetUsed[v] as number, unit: '', source: 'cumulative / limit' },
+      { name: 'budget used', value: verdict.used, unit: '', source: 'cumulative / limit' },
       {
         name: 'close threshold',
         value: s.closeThreshold,
