@@ -54,7 +54,7 @@ function sizeFeeders(nodes: NodeElement[], cables: Cable[]): void {
     if (size !== undefined) c.sizeMm2 = size;
     else {
       c.sizeMm2 = 240;
-      c.parallel = Math.min(100, Math.ceil(needMm2 / 240));
+      c.parallel = Math.min(50, Math.ceil(needMm2 / 240));
     }
   }
 }

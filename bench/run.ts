@@ -1,7 +1,8 @@
 /**
  * `npm run bench`: solver timings on random radial networks against a bare traversal of the same
- * tree, measured in the same run, interleaved, medians of several rounds.
- * `npm run bench -- --json` prints one JSON object instead of the table.
+ * tree, measured in the same run: every size in every round, medians of the rounds' samples.
+ * `npm run bench -- --json` prints one JSON object instead of the table; `--solver-only` skips
+ * the editor benchmark (headless Chromium).
  */
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -34,31 +35,65 @@ interface Row {
   traversalMs: number;
 }
 
-function measure(elements: number): Row {
-  const doc = randomNetwork(elements, 20261201);
-  const rounds = elements >= 100000 ? 15 : elements >= 10000 ? 31 : 101;
-  const solveT: number[] = [];
-  const dropT: number[] = [];
-  const travT: number[] = [];
-  let sink = 0;
+interface Case {
+  doc: ReturnType<typeof randomNetwork>;
+  /** Timed samples per round: more for small networks, so a round's median is not all noise. */
+  repeats: number;
+  solveT: number[];
+  dropT: number[];
+  travT: number[];
+  /** Per round, the median solve time of this size in that round. */
+  roundSolve: number[];
+}
+
+const ROUNDS = 25;
+let sink = 0;
+
+/**
+ * Every size is measured in every round, in blocks one after the other, so each figure and each
+ * ratio between sizes comes from the same stretch of time on a shared machine. The scaling is the
+ * median over rounds of the 100k solve over the 10k solve of the same round (each the median of
+ * its block); the ratio to the traversal is the ratio of the medians, measured in the same blocks.
+ */
+function measureAll(): { rows: Row[]; pairedScaling: number } {
+  const cases: Case[] = SIZES.map((elements) => ({
+    doc: randomNetwork(elements, 20261201),
+    repeats: elements >= 100000 ? 3 : elements >= 10000 ? 5 : 15,
+    solveT: [],
+    dropT: [],
+    travT: [],
+    roundSolve: [],
+  }));
   // Warm up every path so the timed rounds compare compiled code.
-  for (let k = 0; k < 3; k++) {
-    sink += bareTraversal(doc);
-    solve(doc);
-    solveDrop(doc);
-  }
-  for (let k = 0; k < rounds; k++) {
-    travT.push(time(() => (sink += bareTraversal(doc))));
-    solveT.push(time(() => solve(doc)));
-    dropT.push(time(() => solveDrop(doc)));
-  }
+  for (const c of cases)
+    for (let k = 0; k < 3; k++) {
+      sink += bareTraversal(c.doc);
+      solve(c.doc);
+      solveDrop(c.doc);
+    }
+  for (let round = 0; round < ROUNDS; round++)
+    for (const c of cases) {
+      const inRound: number[] = [];
+      for (let k = 0; k < c.repeats; k++) {
+        c.travT.push(time(() => (sink += bareTraversal(c.doc))));
+        const t = time(() => solve(c.doc));
+        c.solveT.push(t);
+        inRound.push(t);
+        c.dropT.push(time(() => solveDrop(c.doc)));
+      }
+      c.roundSolve.push(median(inRound));
+    }
   if (sink < 0) console.log(sink);
-  return {
-    elements: doc.nodes.length + doc.cables.length,
-    solveMs: median(solveT),
-    dropMs: median(dropT),
-    traversalMs: median(travT),
-  };
+  const rows = cases.map((c) => ({
+    elements: c.doc.nodes.length + c.doc.cables.length,
+    solveMs: median(c.solveT),
+    dropMs: median(c.dropT),
+    traversalMs: median(c.travT),
+  }));
+  const big = cases[cases.length - 1] as Case;
+  const ten = cases[SIZES.indexOf(10000)] as Case;
+  const pairedScaling = median(big.roundSolve.map((t, k) => t / (ten.roundSolve[k] as number)));
+  return { rows, pairedScaling };
 }
 
 async function editorBench(): Promise<object | undefined> {
@@ -68,14 +103,13 @@ async function editorBench(): Promise<object | undefined> {
   return mod.runEditorBench ? await mod.runEditorBench() : undefined;
 }
 
-const rows = SIZES.map(measure);
+const { rows, pairedScaling: scaling } = measureAll();
 const last = rows[rows.length - 1] as Row;
 const tenK = rows.find((r) => r.elements >= 9000 && r.elements < 90000) as Row;
 const ratio = last.solveMs / last.traversalMs;
-const scaling = last.solveMs / tenK.solveMs;
 const baseline =
   'bare traversal = build the node id -> index map and the child adjacency from the cables, then walk the tree from the supply iteratively with one addition per element';
-const editor = await editorBench();
+const editor = process.argv.includes('--solver-only') ? undefined : await editorBench();
 
 if (json) {
   const out: Record<string, unknown> = {
@@ -87,6 +121,8 @@ if (json) {
     })),
     ratioAt100k: ratio,
     scaling10kTo100k: scaling,
+    scalingOfMedians: last.solveMs / tenK.solveMs,
+    rounds: ROUNDS,
     targets: { ratioAt100k: TARGET_RATIO, scaling10kTo100k: TARGET_SCALING },
     baseline,
   };
@@ -104,7 +140,8 @@ if (json) {
     );
   console.log(
     `At ${last.elements} elements: solve is ${ratio.toFixed(2)}x the traversal (target <= ${TARGET_RATIO}x); ` +
-      `10k -> 100k scaling ${scaling.toFixed(2)}x (target <= ${TARGET_SCALING}x).`,
+      `10k -> 100k scaling ${scaling.toFixed(2)}x (target <= ${TARGET_SCALING}x; median of ${ROUNDS} paired rounds, ` +
+      `${(last.solveMs / tenK.solveMs).toFixed(2)}x from the medians).`,
   );
   if (editor !== undefined) console.log('Editor:', JSON.stringify(editor));
 }
