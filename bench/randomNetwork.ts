@@ -20,6 +20,8 @@ export function rng(seed: number): () => number {
 
 const PHASES = ['L1', 'L2', 'L3'] as const;
 const FINAL_SIZES = [1.5, 2.5, 4, 6, 10];
+/** Levels of boards below the origin (main board = 1). */
+const MAX_BOARD_DEPTH = 4;
 const MAIN_SIZES = [16, 25, 35, 50, 70, 95, 120, 150, 185, 240];
 
 /**
@@ -101,7 +103,8 @@ export function randomNetwork(elements: number, seed = 1): ProjectDocument {
     pfcKa: 10,
     ownership: 'public',
   });
-  const boards: string[] = ['S'];
+  // Boards that take final circuits: the origin feeds boards only, as at a real intake.
+  const boards: string[] = [];
   let c = 0;
   const cable = (from: string, to: string, phases: 1 | 3, sizeMm2: number, lengthM: number): Cable => ({
     id: `C${c++}`,
@@ -119,21 +122,43 @@ export function randomNetwork(elements: number, seed = 1): ProjectDocument {
     parallel: 1,
   });
   const ways = new Map<string, number>();
+  const depth = new Map<string, number>([['S', 0]]);
+  // Boards that may feed another board. Real distribution has a few levels (origin, main board,
+  // sub-main boards, local boards), so a bigger site grows in breadth, not in depth, and its
+  // paths, drops and findings per element stay like a smaller one's.
+  const feeders: string[] = ['S'];
+  // A board takes at most 36 outgoing ways, like a real one; full boards take no more.
+  const free = (b: string) => (ways.get(b) ?? 0) < 36;
+  /** A random board from `list` with a way free, else the newest such one. */
+  const pick = (list: string[]): string | undefined => {
+    for (let t = 0; t < 8; t++) {
+      const b = list[Math.floor(rand() * list.length)] as string;
+      if (free(b)) return b;
+    }
+    for (let k = list.length - 1; k >= 0; k--) if (free(list[k] as string)) return list[k];
+    return undefined;
+  };
   while (nodes.length < nodeTarget) {
-    // A board takes at most 36 outgoing ways, like a real one; full boards stop taking more.
-    let from = boards[Math.floor(rand() * boards.length)] as string;
-    if ((ways.get(from) ?? 0) >= 36) from = boards[boards.length - 1] as string;
-    ways.set(from, (ways.get(from) ?? 0) + 1);
     const k = nodes.length;
     const roll = rand();
-    if (roll < 0.06 || boards.length < 3 || (ways.get(boards[boards.length - 1] as string) ?? 0) >= 36) {
+    const from = roll < 0.06 || boards.length < 2 ? undefined : pick(boards);
+    if (from === undefined) {
+      // A new board, also when every board is full.
+      const parent = pick(feeders) ?? (feeders[feeders.length - 1] as string);
+      ways.set(parent, (ways.get(parent) ?? 0) + 1);
       const id = `B${k}`;
+      const level = (depth.get(parent) ?? 0) + 1;
+      depth.set(id, level);
       nodes.push({ kind: 'board', id, name: '', position: pos, diversity: 0.7 + 0.3 * rand() });
       cables.push(
-        cable(from, id, 3, MAIN_SIZES[Math.floor(rand() * MAIN_SIZES.length)] as number, 5 + 30 * rand()),
+        cable(parent, id, 3, MAIN_SIZES[Math.floor(rand() * MAIN_SIZES.length)] as number, 5 + 30 * rand()),
       );
       boards.push(id);
-    } else if (roll < 0.1) {
+      if (level < MAX_BOARD_DEPTH) feeders.push(id);
+      continue;
+    }
+    ways.set(from, (ways.get(from) ?? 0) + 1);
+    if (roll < 0.1) {
       const j = `J${k}`;
       const id = `L${k + 1}`;
       nodes.push({ kind: 'junction', id: j, name: '', position: pos });
