@@ -3,9 +3,9 @@
  * a board dragged with the mouse for 60 frames at 100 % zoom. Reports the median and p95 interval
  * between frames (requestAnimationFrame timestamps during the drag), and the ratio of main-thread
  * work per frame with live labels on to the same drag with labels off, measured in the same run
- * in alternating rounds after an untimed warm-up pair (the median of each on round over the off round
- * after it). Work is Chromium's own TaskDuration metric (script, style, layout and
- * paint on the main thread), read through the DevTools protocol before and after each drag.
+ * in alternating rounds after an untimed warm-up pair (the median of each on round over the off
+ * round after it). Work is Chromium's own TaskDuration metric (script, style, layout and paint on
+ * the main thread), read through the DevTools protocol before and after each drag.
  */
 import { spawn, spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';

@@ -105,7 +105,7 @@ async function editorBench(): Promise<object | undefined> {
 
 const { rows, pairedScaling: scaling } = measureAll();
 const last = rows[rows.length - 1] as Row;
-const tenK = rows.find((r) => r.elements >= 9000 && r.elements < 90000) as Row;
+const tenK = rows[SIZES.indexOf(10000)] as Row;
 const ratio = last.solveMs / last.traversalMs;
 const baseline =
   'bare traversal = build the node id -> index map and the child adjacency from the cables, then walk the tree from the supply iteratively with one addition per element';
