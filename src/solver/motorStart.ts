@@ -3,6 +3,7 @@
  * path, at the starting power factor, as a share of U0, at the motor and at its board.
  */
 import type { Id, Load } from '../model/types.ts';
+import { elementLabel } from './elementLabel.ts';
 import type { Results } from './results.ts';
 import type { Check, Impedance, MotorStartResult } from './protection/protectionResults.ts';
 import type { Topology } from './protection/topology.ts';
@@ -97,7 +98,7 @@ export function motorStartFor(
       '% of U0',
       ok
         ? `dip ${fmt(atMotor)} % <= ${m.dipLimitPct} %${atBoard !== null ? `; ${fmt(atBoard)} % at its board` : ''}`
-        : `${load.name}: starting dip ${fmt(atMotor)} % exceeds the ${m.dipLimitPct} % limit; use a larger or shorter supply, or reduced-voltage starting`,
+        : `${elementLabel('load', load.id, load.name)}: starting dip ${fmt(atMotor)} % exceeds the ${m.dipLimitPct} % limit; use a larger or shorter supply, or reduced-voltage starting`,
       w,
     ),
   };

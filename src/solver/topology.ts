@@ -8,6 +8,7 @@ import { KIND_BOARD, KIND_INVALID, KIND_JUNCTION, KIND_LOAD, KIND_SUPPLY } from 
 import type { DropFinding } from './findings.ts';
 import { shown } from './findings.ts';
 import { RowMemo, readCable, readNode } from './readFields.ts';
+import { elementLabel } from './elementLabel.ts';
 
 function kindCode(kind: unknown): number | undefined {
   switch (kind) {
@@ -29,10 +30,11 @@ const KIND_WORD = ['supply', 'board', 'junction', 'load'];
 /** "board B2" / "load L7" for messages. */
 export function nodeLabel(s: DropState, i: number): string {
   const node = s.nodes[i] as { name?: unknown } | undefined;
-  const word = KIND_WORD[s.nodeKind[i] ?? KIND_INVALID] ?? 'element';
-  const name =
-    typeof node?.name === 'string' && node.name !== '' && node.name !== s.nodeIds[i] ? ` (${node.name})` : '';
-  return `${word} ${s.nodeIds[i]}${name}`;
+  return elementLabel(
+    KIND_WORD[s.nodeKind[i] ?? KIND_INVALID] ?? 'element',
+    s.nodeIds[i] as string,
+    node?.name,
+  );
 }
 
 type Loose = Record<string, unknown>;

@@ -21,6 +21,7 @@ import { treeInputs } from './treeInputs.ts';
 import { protectionPass } from './protectionPass.ts';
 import { protectedRecords } from './protectionViews.ts';
 import { boardBalances } from '../balancePhases.ts';
+import { elementLabel } from '../elementLabel.ts';
 
 /** Optional protection data a catalogue may carry; the built-in sets are used where absent. */
 interface ProtectionData {
@@ -47,7 +48,7 @@ export function attachProtection(doc: ProjectDocument, results: Results, catalog
       severity: 'warning',
       elementId: supply?.id,
       message: supply
-        ? `supply ${supply.name}: pfcKa must be above 0 (or give a transformer for a private supply) to compute fault levels and loop impedance`
+        ? `${elementLabel('supply', supply.id, supply.name)}: pfcKa must be above 0 (or give a transformer for a private supply) to compute fault levels and loop impedance`
         : 'no supply: loop impedance and fault level cannot be computed',
     });
     return { ...results, findings };

@@ -11,7 +11,8 @@ import { BUILT_IN_CAPACITY_TABLES, type CapacityTable } from '../../catalogue/ca
 import type { Check, FaultLevel, Impedance, NodeProtection } from './protectionResults.ts';
 import { buildTopology } from './topology.ts';
 import { cableCapacity } from './capacity.ts';
-import { breakingCheck, capacityChecks, cpcCheck } from './cableChecks.ts';
+import { breakingCheck, capacityChecks, cpcCheck, sendingEnd } from './cableChecks.ts';
+import { cableLabel, elementLabel } from '../elementLabel.ts';
 import { zsChecks } from './zsCheck.ts';
 import { requiredDisconnectionS } from './disconnection.ts';
 import { C_MAX, magnitude, segmentLoop, sourceImpedance } from './impedance.ts';
@@ -65,7 +66,7 @@ export function attachProtectionReference(
       severity: 'warning',
       elementId: supply?.id,
       message: supply
-        ? `supply ${supply.name}: pfcKa must be above 0 (or give a transformer for a private supply) to compute fault levels and loop impedance`
+        ? `${elementLabel('supply', supply.id, supply.name)}: pfcKa must be above 0 (or give a transformer for a private supply) to compute fault levels and loop impedance`
         : 'no supply: loop impedance and fault level cannot be computed',
     });
     return { ...results, findings };
@@ -127,7 +128,7 @@ export function attachProtectionReference(
         code: 'noResistance',
         severity: 'warning',
         elementId: cable.id,
-        message: `cable ${cable.name}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
+        message: `${cableLabel(cable)}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
       });
       continue;
     }
@@ -147,13 +148,13 @@ export function attachProtectionReference(
     const circuit = topo.circuit.get(cable.id) ?? 'final';
     const requiredS = device ? requiredDisconnectionS(supply.earthing, circuit, settingA(device), u0) : null;
     const toNode = topo.nodeById.get(cable.to);
-    const nodeName = `${toNode?.kind ?? 'node'} ${toNode?.name ?? cable.to}`;
+    const nodeName = elementLabel(toNode?.kind ?? 'node', cable.to, toNode?.name);
 
     const cap = cableCapacity(cable, tables);
     const checks = capacityChecks(cable, cr.ibA, device, cap);
     if (cable.device) {
       const f = faultLevel(up, u0);
-      checks.push(breakingCheck(cable, cable.device, f.maxA, `the sending end of ${cable.name}`));
+      checks.push(breakingCheck(cable, cable.device, f.maxA, sendingEnd(cableLabel(cable))));
     }
     const zsOhm = magnitude(a.zsHot);
     const earthFaultA = (CMIN * u0) / zsOhm;

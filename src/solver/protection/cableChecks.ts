@@ -10,6 +10,7 @@ import type { Check, CheckKey } from './protectionResults.ts';
 import type { CapacityOk } from './capacity.ts';
 import { operatingTimeS } from './disconnection.ts';
 import { fmt, working } from './working.ts';
+import { cableLabel } from '../elementLabel.ts';
 
 // Messages of checks that fail or cannot be assessed: shared with the fast pass, which builds
 // findings without building the checks.
@@ -20,16 +21,16 @@ export const inIzFailMessage = (src: string, label: string, base: number, izA: n
   `${src}: ${label} ${fmt(base)} A exceeds Iz ${fmt(izA)} A; increase the size or improve the installation conditions`;
 export const i2FailMessage = (src: string, i2: number, lim: number): string =>
   `${src}: I2 ${fmt(i2)} A exceeds 1.45 Iz ${fmt(lim)} A; use a larger cable or a smaller device`;
-export const breakingFailMessage = (name: string, kA: number, where: string, breakingKa: number): string =>
-  `cable ${name}: prospective fault current ${fmt(kA)} kA at ${where} exceeds the device's ${breakingKa} kA; choose a device with a higher breaking capacity`;
+export const breakingFailMessage = (label: string, kA: number, where: string, breakingKa: number): string =>
+  `${label}: prospective fault current ${fmt(kA)} kA at ${where} exceeds the device's ${breakingKa} kA; choose a device with a higher breaking capacity`;
 export const CPC_WHY_SLOW = 'the device does not operate within 5 s at this fault current';
 export const CPC_WHY_NO_DEVICE = 'no protective device given';
-export const cpcNotAssessedMessage = (name: string, why: string): string =>
-  `cable ${name}: adiabatic check not possible: ${why}`;
-export const cpcFailMessage = (name: string, cpcMm2: number, sMin: number): string =>
-  `cable ${name}: cpc ${fmt(cpcMm2)} mm² is below the ${fmt(sMin)} mm² the adiabatic equation needs; increase the cpc`;
+export const cpcNotAssessedMessage = (label: string, why: string): string =>
+  `${label}: adiabatic check not possible: ${why}`;
+export const cpcFailMessage = (label: string, cpcMm2: number, sMin: number): string =>
+  `${label}: cpc ${fmt(cpcMm2)} mm² is below the ${fmt(sMin)} mm² the adiabatic equation needs; increase the cpc`;
 /** Where a breaking-capacity check applies, for its message and working. */
-export const sendingEnd = (name: string): string => `the sending end of ${name}`;
+export const sendingEnd = (label: string): string => `the sending end of ${label}`;
 
 export function check(
   key: CheckKey,
@@ -52,7 +53,7 @@ export function capacityChecks(
   cap: CapacityOk | { error: string },
 ): Check[] {
   const out: Check[] = [];
-  const src = `cable ${cable.name}`;
+  const src = cableLabel(cable);
   const inA = device ? settingA(device) : null;
   if (device && inA !== null) {
     out.push(
@@ -172,7 +173,7 @@ export function breakingCheck(cable: Cable, device: Device, pfcA: number, where:
     'kA',
     ok
       ? `${fmt(kA)} kA <= ${device.breakingKa} kA`
-      : breakingFailMessage(cable.name, kA, where, device.breakingKa),
+      : breakingFailMessage(cableLabel(cable), kA, where, device.breakingKa),
     working(
       'breaking',
       'Breaking capacity',
@@ -224,7 +225,7 @@ export function cpcCheck(
       'mm²',
       byTable
         ? `cpc ${cable.cpc.sizeMm2} mm² meets the table minimum ${tableMin} mm²`
-        : cpcNotAssessedMessage(cable.name, why),
+        : cpcNotAssessedMessage(cableLabel(cable), why),
       working(
         'cpc',
         title,
@@ -247,7 +248,7 @@ export function cpcCheck(
     'mm²',
     ok
       ? `needs ${fmt(sMin)} mm², has ${fmt(cpcMm2)} mm²${cpcMm2 < sMin ? ' (table method)' : ''}`
-      : cpcFailMessage(cable.name, cpcMm2, sMin),
+      : cpcFailMessage(cableLabel(cable), cpcMm2, sMin),
     working(
       'cpc',
       title,

@@ -5,6 +5,7 @@
  * load's loops, R1 + R2, the required time and Zs max from the memo and the device when built.
  */
 import type { NodeElement, Supply } from '../../model/types.ts';
+import { elementLabel } from '../elementLabel.ts';
 import type { FaultLevel } from './protectionResults.ts';
 import { C_MAX, type SourceImpedance } from './impedance.ts';
 import { hypot } from '../hypot.ts';
@@ -142,7 +143,7 @@ export function faultLevelOf(loops: Loops, u0V: number): FaultLevel {
   return { lnA, lllA, maxA: Math.max(lnA, lllA ?? 0), cMax: C_MAX };
 }
 
-/** "board DB2" for check messages. */
+/** "board DB2 (Offices board)" for check messages. */
 export function nodeName(node: NodeElement | undefined, id: string): string {
-  return `${node?.kind ?? 'node'} ${node?.name ?? id}`;
+  return elementLabel(node?.kind ?? 'node', id, node?.name);
 }

@@ -21,6 +21,7 @@ import {
 } from './disconnection.ts';
 import { FAIL_CODES } from './protectionWorking.ts';
 import { flattenMessages } from '../findings.ts';
+import { cableLabel } from '../elementLabel.ts';
 import type { CapacityMemo, ConductorFigures } from './capacityMemo.ts';
 import { KIND_LOAD, type TreeInputs } from './treeInputs.ts';
 import { cableIbA } from '../flow.ts';
@@ -94,7 +95,7 @@ export class Tagged {
       code: 'noResistance',
       severity: 'warning',
       elementId: cable.id,
-      message: `cable ${cable.name}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
+      message: `${cableLabel(cable)}: IEC 60228 lists no resistance for ${cable.material} ${cable.sizeMm2} mm² or cpc ${cable.cpc.sizeMm2} mm²; choose a standard size`,
     });
   }
   /** A stable counting sort by breadth-first position onto `out` (`rank`: each node's). */
@@ -148,20 +149,19 @@ export function cableFindings(
     );
   }
   const ibA = t.drop ? cableIbA(t.drop, j) : t.ibA(j);
-  if (device && !(ibA <= inA))
-    out.fail(tag, 'ibIn', id, msg.ibInFailMessage(`cable ${cable.name}`, ibA, inA));
+  if (device && !(ibA <= inA)) out.fail(tag, 'ibIn', id, msg.ibInFailMessage(cableLabel(cable), ibA, inA));
   const cap = memo.list[a.capAt[j]!]!;
   if ('error' in cap) {
-    out.unknown(tag, id, msg.capacityErrorMessage(`cable ${cable.name}`, cap.error));
+    out.unknown(tag, id, msg.capacityErrorMessage(cableLabel(cable), cap.error));
   } else {
     const izA = cap.izA;
     const base = device ? inA : ibA;
     if (!(base <= izA))
-      out.fail(tag, 'inIz', id, msg.inIzFailMessage(`cable ${cable.name}`, device ? 'In' : 'Ib', base, izA));
+      out.fail(tag, 'inIz', id, msg.inIzFailMessage(cableLabel(cable), device ? 'In' : 'Ib', base, izA));
     if (device) {
       const i2 = conventionalOperatingMultiple(device.type, inA) * inA;
       const lim = 1.45 * izA;
-      if (!(i2 <= lim)) out.fail(tag, 'i2', id, msg.i2FailMessage(`cable ${cable.name}`, i2, lim));
+      if (!(i2 <= lim)) out.fail(tag, 'i2', id, msg.i2FailMessage(cableLabel(cable), i2, lim));
     }
   }
   const own = cable.device;
@@ -178,7 +178,7 @@ export function cableFindings(
         tag,
         'breaking',
         id,
-        msg.breakingFailMessage(cable.name, kA, msg.sendingEnd(cable.name), own.breakingKa),
+        msg.breakingFailMessage(cableLabel(cable), kA, msg.sendingEnd(cableLabel(cable)), own.breakingKa),
       );
   }
   // Adiabatic check on the cpc at the far end's earth fault current.
@@ -190,12 +190,13 @@ export function cableFindings(
       out.unknown(
         tag,
         id,
-        msg.cpcNotAssessedMessage(cable.name, device ? msg.CPC_WHY_SLOW : msg.CPC_WHY_NO_DEVICE),
+        msg.cpcNotAssessedMessage(cableLabel(cable), device ? msg.CPC_WHY_SLOW : msg.CPC_WHY_NO_DEVICE),
       );
   } else {
     const sMin = msg.adiabaticMinimumMm2(earthFaultA, tS, conductor.cpcK);
     const cpcMm2 = cable.cpc.sizeMm2 * Math.max(1, cable.parallel);
-    if (!(cpcMm2 >= sMin || byTable)) out.fail(tag, 'cpc', id, msg.cpcFailMessage(cable.name, cpcMm2, sMin));
+    if (!(cpcMm2 >= sMin || byTable))
+      out.fail(tag, 'cpc', id, msg.cpcFailMessage(cableLabel(cable), cpcMm2, sMin));
   }
 }
 

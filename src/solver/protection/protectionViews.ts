@@ -18,6 +18,7 @@ import type {
 import type { Working } from '../results.ts';
 import { cableCapacity } from './capacity.ts';
 import { breakingCheck, capacityChecks, cpcCheck, sendingEnd } from './cableChecks.ts';
+import { cableLabel } from '../elementLabel.ts';
 import { zsChecks } from './zsCheck.ts';
 import { segmentLoop, type SourceImpedance } from './impedance.ts';
 import { pfcWorking, r1r2Working, zsWorking } from './protectionWorking.ts';
@@ -135,7 +136,7 @@ export class CableProtectionView implements CableProtection {
       const checks = capacityChecks(cable, this.#ibA, this.device, this.#capacity());
       if (cable.device) {
         const maxA = faultMaxA(a, t.cableFrom[j]!, u0V);
-        checks.push(breakingCheck(cable, cable.device, maxA, sendingEnd(cable.name)));
+        checks.push(breakingCheck(cable, cable.device, maxA, sendingEnd(cableLabel(cable))));
       }
       const v = t.cableTo[j]!;
       const far = loopsAt(this.#c, v);
