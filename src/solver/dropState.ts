@@ -8,6 +8,7 @@ import type { CatalogueSet, ConductorRow } from '../catalogue/catalogueSet.ts';
 import type { LimitProfile } from '../catalogue/limits.ts';
 import type { DropFinding } from './findings.ts';
 import type { IdIndex } from './idIndex.ts';
+import type { IdList } from './idList.ts';
 
 export const KIND_SUPPLY = 0;
 export const KIND_BOARD = 1;
@@ -42,9 +43,9 @@ export interface DropState {
   nodeIndex: IdIndex;
   cableIndex: IdIndex;
   nodeKind: Uint8Array;
-  /** Valid ids (or '' where the element is malformed). */
-  nodeIds: string[];
-  cableIds: string[];
+  /** Valid ids (or '' where the element is malformed or repeats an earlier id). */
+  nodeIds: IdList;
+  cableIds: IdList;
   /** Cable index feeding each node, -1 where none. */
   parentCable: Int32Array;
   cableFrom: Int32Array;

@@ -5,6 +5,8 @@
  * `index.get(id)` works unchanged. Should ids collide too often (a hostile file), it moves
  * everything into a plain Map and carries on, so the cost stays linear.
  */
+import type { IdList } from './idList.ts';
+
 const MAX_PROBE = 48;
 /**
  * A slot holds position + 1 in its low 24 bits and the top 8 bits of the id's hash above them, so
@@ -31,7 +33,7 @@ export class IdIndex implements ReadonlyMap<string, number> {
 
   /** `ids` is the state's id list ('' where an element has no id of its own); claims write it. */
   constructor(
-    private readonly ids: string[],
+    private readonly ids: IdList,
     capacity: number,
   ) {
     let size = 16;
@@ -51,7 +53,7 @@ export class IdIndex implements ReadonlyMap<string, number> {
       const held = this.fallback.get(id);
       if (held !== undefined) return held;
       this.fallback.set(id, i);
-      this.ids[i] = id;
+      this.ids.set(i, id);
       this.count++;
       return i;
     }
@@ -63,16 +65,19 @@ export class IdIndex implements ReadonlyMap<string, number> {
       const entry = slots[at] as number;
       if (entry === 0) {
         slots[at] = (i + 1) | tag;
-        ids[i] = id;
+        ids.set(i, id);
         this.count++;
         return i;
       }
       const held = (entry & POSITION_BITS) - 1;
-      if ((entry & TAG_BITS) === tag && ids[held] === id) return held;
+      if ((entry & TAG_BITS) === tag && ids.at(held) === id) return held;
       at = (at + 1) & mask;
     }
     this.fallback = new Map();
-    for (let k = 0; k < i; k++) if (ids[k] !== '') this.fallback.set(ids[k] as string, k);
+    for (let k = 0; k < i; k++) {
+      const held = ids.at(k);
+      if (held !== '') this.fallback.set(held, k);
+    }
     return this.claim(id, i);
   }
 
@@ -87,7 +92,7 @@ export class IdIndex implements ReadonlyMap<string, number> {
       const entry = slots[at] as number;
       if (entry === 0) return undefined;
       const held = (entry & POSITION_BITS) - 1;
-      if ((entry & TAG_BITS) === tag && ids[held] === id) return held;
+      if ((entry & TAG_BITS) === tag && ids.at(held) === id) return held;
       at = (at + 1) & mask;
     }
     return undefined;
@@ -102,7 +107,10 @@ export class IdIndex implements ReadonlyMap<string, number> {
   }
 
   *entries(): MapIterator<[string, number]> {
-    for (let k = 0; k < this.ids.length; k++) if (this.ids[k] !== '') yield [this.ids[k] as string, k];
+    for (let k = 0; k < this.ids.length; k++) {
+      const id = this.ids.at(k);
+      if (id !== '') yield [id, k];
+    }
   }
 
   *keys(): MapIterator<string> {

@@ -126,7 +126,7 @@ export function judgeLoads(s: DropState): void {
         findings.push({
           code: 'badCategory',
           severity: 'warning',
-          elementId: s.nodeIds[v] as string,
+          elementId: s.nodeIds.at(v),
           message: `${nodeLabel(s, v)}: category must be lighting or other, got ${shown((s.nodes[v] as { category?: unknown }).category)}; it is judged against the stricter lighting limit.`,
         });
       s.worstPhase[v] = worst;
@@ -146,14 +146,14 @@ export function judgeLoads(s: DropState): void {
           findings.push({
             code: 'overLimit',
             severity: 'error',
-            elementId: s.nodeIds[v] as string,
+            elementId: s.nodeIds.at(v),
             message: `${nodeLabel(s, v)}: drop from the origin ${worstPct.toFixed(2)} % of U0 is over its ${category} limit of ${limit.toFixed(2)} %${branchLimit !== undefined ? ` (or its branch drop ${branchWorst.toFixed(2)} % is over ${branchLimit} %)` : ''}; use a larger cable on the path or shorten it.`,
           });
         else if (code === 1)
           findings.push({
             code: 'closeToLimit',
             severity: 'warning',
-            elementId: s.nodeIds[v] as string,
+            elementId: s.nodeIds.at(v),
             message: `${nodeLabel(s, v)}: uses ${(used * 100).toFixed(0)} % of its drop budget (${worstPct.toFixed(2)} % of U0 against ${limit.toFixed(2)} %).`,
           });
       }

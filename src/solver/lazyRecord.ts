@@ -5,8 +5,10 @@
  * adds to results still works. It lets a 100,000-element solve skip building result objects
  * nobody looks at.
  */
+import type { IdsByPosition } from './idList.ts';
+
 export function lazyRecord<T extends object>(
-  ids: readonly string[],
+  ids: IdsByPosition,
   index: ReadonlyMap<string, number>,
   include: (i: number) => boolean,
   make: (i: number) => T,
@@ -20,7 +22,7 @@ export function lazyRecord<T extends object>(
     if (typeof key !== 'string') return undefined;
     if (overrides.has(key)) return overrides.get(key);
     const i = index.get(key);
-    if (i === undefined || ids[i] !== key || !include(i)) return undefined;
+    if (i === undefined || ids.at(i) !== key || !include(i)) return undefined;
     built ??= new Array<T | undefined>(ids.length);
     let value = built[i];
     if (value === undefined) {
@@ -32,7 +34,10 @@ export function lazyRecord<T extends object>(
   const ownKeys = (): string[] => {
     if (!keys) {
       keys = [];
-      for (let i = 0; i < ids.length; i++) if (ids[i] !== '' && include(i)) keys.push(ids[i] as string);
+      for (let i = 0; i < ids.length; i++) {
+        const id = ids.at(i);
+        if (id !== '' && include(i)) keys.push(id);
+      }
     }
     if (overrides.size === 0) return keys;
     const out = keys.filter((k) => !overrides.has(k) || overrides.get(k) !== undefined);

@@ -35,7 +35,7 @@ export function phaseIgnoredFindings(s: DropState): void {
       s.findings.push({
         code: 'phaseIgnored',
         severity: 'info',
-        elementId: s.nodeIds[v] as string,
+        elementId: s.nodeIds.at(v),
         message: `${nodeLabel(s, v)}: set to phase ${shown(el.phase)} but the supply is single-phase; it is solved on the supply's phase L1.`,
       });
   }
@@ -58,8 +58,8 @@ export function assignCablePhases(s: DropState, v: number, j: number, u: number)
       findings.push({
         code: 'phaseMismatch',
         severity: 'error',
-        elementId: s.cableIds[j] as string,
-        message: `cable ${s.cableIds[j]} is three-phase but ${nodeLabel(s, u)} has only phase ${BIT_NAME[avail] ?? '?'}; feed it from a three-phase point or make it single-phase.`,
+        elementId: s.cableIds.at(j),
+        message: `cable ${s.cableIds.at(j)} is three-phase but ${nodeLabel(s, u)} has only phase ${BIT_NAME[avail] ?? '?'}; feed it from a three-phase point or make it single-phase.`,
       });
     }
   } else if (phases === 1) {
@@ -76,8 +76,8 @@ export function assignCablePhases(s: DropState, v: number, j: number, u: number)
     findings.push({
       code: 'badPhases',
       severity: 'error',
-      elementId: s.cableIds[j] as string,
-      message: `cable ${s.cableIds[j]}: phases must be 1 or 3, got ${shown((s.cables[j] as unknown as Record<string, unknown>).phases)}.`,
+      elementId: s.cableIds.at(j),
+      message: `cable ${s.cableIds.at(j)}: phases must be 1 or 3, got ${shown((s.cables[j] as unknown as Record<string, unknown>).phases)}.`,
     });
   }
   s.cablePhases[j] = mask;
@@ -94,7 +94,7 @@ function singlePhaseConflict(
   avail: number,
 ): void {
   const { findings } = s;
-  const id = s.cableIds[j] as string;
+  const id = s.cableIds.at(j);
   s.cableBad[j] = 1;
   if (three)
     findings.push({

@@ -64,7 +64,7 @@ export class CableResultView implements CableResult {
   constructor(s: DropState, j: number) {
     this.#s = s;
     this.#j = j;
-    this.id = s.cableIds[j] as string;
+    this.id = s.cableIds.at(j);
     const v = s.cableTo[j] as number;
     const inTree = v >= 0 && s.reached[v] === 1;
     const mask = inTree ? (s.cablePhases[j] as number) : 0;
@@ -135,10 +135,10 @@ export class NodeResultView implements NodeResult {
   constructor(s: DropState, v: number) {
     this.#s = s;
     this.#v = v;
-    this.id = s.nodeIds[v] as string;
+    this.id = s.nodeIds.at(v);
     this.solved = s.reached[v] === 1;
     this.status = this.solved ? statusOf(s.status[v] as number) : null;
-    this.path = pathTo(s, v).map((j) => s.cableIds[j] as string);
+    this.path = pathTo(s, v).map((j) => s.cableIds.at(j));
     const mask = !this.solved
       ? 0
       : s.nodeKind[v] === KIND_LOAD
@@ -196,7 +196,7 @@ export class LoadResultView extends NodeResultView implements LoadResult {
     const total = verdict.worstPct;
     this.shares = pathTo(s, v).map((j) => {
       const dropPct = ((s.dropProj[j * 3 + p] as number) / s.u0V) * 100;
-      return { cableId: s.cableIds[j] as string, dropPct, share: total > 0 ? dropPct / total : 0 };
+      return { cableId: s.cableIds.at(j), dropPct, share: total > 0 ? dropPct / total : 0 };
     });
   }
 }

@@ -30,6 +30,7 @@ import { judgeLoads } from './judge.ts';
 import { CableResultView, LoadResultView, NodeResultView } from './resultObjects.ts';
 import { lazyRecord } from './lazyRecord.ts';
 import { IdIndex } from './idIndex.ts';
+import { IdList } from './idList.ts';
 
 type Loose = Record<string, unknown>;
 
@@ -83,8 +84,8 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
   const read = readSettings(doc, findings);
   const n = nodes.length;
   const m = cables.length;
-  const nodeIds = new Array<string>(n).fill('');
-  const cableIds = new Array<string>(m).fill('');
+  const nodeIds = new IdList(n);
+  const cableIds = new IdList(m);
   return {
     doc: doc as ProjectDocument,
     catalogue,
@@ -120,7 +121,7 @@ function allocate(doc: unknown, catalogue: CatalogueSet, findings: DropFinding[]
 function readVoltages(s: DropState, settings: Loose): void {
   const ok = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0 && v < 100000;
   const supply = s.root >= 0 ? (s.nodes[s.root] as unknown as Loose) : undefined;
-  const id = s.root >= 0 ? (s.nodeIds[s.root] as string) : '';
+  const id = s.root >= 0 ? s.nodeIds.at(s.root) : '';
   if (supply && ok(supply.u0V)) {
     s.u0V = supply.u0V;
     s.voltageSource.u0 = `document: supply ${id} u0V`;

@@ -30,11 +30,7 @@ const KIND_WORD = ['supply', 'board', 'junction', 'load'];
 /** "board B2" / "load L7" for messages. */
 export function nodeLabel(s: DropState, i: number): string {
   const node = s.nodes[i] as { name?: unknown } | undefined;
-  return elementLabel(
-    KIND_WORD[s.nodeKind[i] ?? KIND_INVALID] ?? 'element',
-    s.nodeIds[i] as string,
-    node?.name,
-  );
+  return elementLabel(KIND_WORD[s.nodeKind[i] ?? KIND_INVALID] ?? 'element', s.nodeIds.at(i), node?.name);
 }
 
 type Loose = Record<string, unknown>;
@@ -108,7 +104,7 @@ export function buildTopology(s: DropState): void {
     findings.push({
       code: 'manySupplies',
       severity: 'error',
-      elementId: nodeIds[i] as string,
+      elementId: nodeIds.at(i),
       message: `${nodeLabel(s, i)}: a project has exactly one supply; remove this one or join its part of the diagram to the first supply. Nothing below it is solved.`,
     });
   }
@@ -145,11 +141,11 @@ export function buildTopology(s: DropState): void {
     // sending end (siblings) or the last node fed (a chain), before the index. A node holds its
     // id in nodeIds only when it is the id's first holder, which is what the index answers.
     const nextTo = lastTo + 1;
-    const to = nextTo < n && nodeIds[nextTo] === toId && toId !== '' ? nextTo : nodeIndex.get(toId);
+    const to = nextTo < n && nodeIds.at(nextTo) === toId && toId !== '' ? nextTo : nodeIndex.get(toId);
     const from =
-      lastFrom >= 0 && nodeIds[lastFrom] === fromId
+      lastFrom >= 0 && nodeIds.at(lastFrom) === fromId
         ? lastFrom
-        : lastTo >= 0 && nodeIds[lastTo] === fromId
+        : lastTo >= 0 && nodeIds.at(lastTo) === fromId
           ? lastTo
           : nodeIndex.get(fromId);
     if (to !== undefined) lastTo = to;
@@ -258,7 +254,7 @@ function cableProblem(
       message: `cable ${id} starts at ${nodeLabel(s, from)}; loads are end points. Start it at a board or junction, or swap its ends.`,
     };
   if (s.parentCable[to] !== -1) {
-    const first = s.cableIds[s.parentCable[to] as number];
+    const first = s.cableIds.at(s.parentCable[to] as number);
     return {
       code: 'fedTwice',
       severity: 'error',
@@ -289,7 +285,7 @@ function classifyUnreached(s: DropState, findings: DropFinding[]): void {
       let x = w;
       do {
         const pc = s.parentCable[x] as number;
-        ring.push(s.cableIds[pc] as string);
+        ring.push(s.cableIds.at(pc));
         x = s.cableFrom[pc] as number;
       } while (x !== w);
       ring.reverse();
@@ -305,7 +301,7 @@ function classifyUnreached(s: DropState, findings: DropFinding[]): void {
         findings.push({
           code: 'island',
           severity: 'error',
-          elementId: s.nodeIds[top] as string,
+          elementId: s.nodeIds.at(top),
           message: `${nodeLabel(s, top)} is fed by nothing: connect a cable to it from a board or the supply. It and everything below it are not solved.`,
         });
       }

@@ -28,7 +28,7 @@ export function validateCables(s: DropState): void {
     const to = cableTo[j] as number;
     if (to < 0 || !reached[to] || !cableCheck[j]) continue;
     const c = s.cables[j] as unknown as Loose;
-    const id = s.cableIds[j] as string;
+    const id = s.cableIds.at(j);
     if (!positive(c.lengthM))
       findings.push({
         code: 'badLength',
@@ -96,7 +96,7 @@ export function validateNodes(s: DropState): void {
     const i = order[k] as number;
     if (!nodeCheck[i]) continue;
     const el = s.nodes[i] as unknown as Loose;
-    const id = s.nodeIds[i] as string;
+    const id = s.nodeIds.at(i);
     if (s.nodeKind[i] === KIND_BOARD) {
       findings.push({
         code: 'badDiversity',

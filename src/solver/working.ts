@@ -31,7 +31,7 @@ function field(kind: string, id: string, name: string): string {
 
 /** Every record for one cable. */
 export function cableWorking(s: DropState, j: number): Working[] {
-  const id = s.cableIds[j] as string;
+  const id = s.cableIds.at(j);
   const c = s.cables[j] as unknown as Record<string, unknown>;
   const v = s.cableTo[j] as number;
   if (v < 0 || !s.reached[v]) {
@@ -47,7 +47,7 @@ export function cableWorking(s: DropState, j: number): Working[] {
   }
   const out: Working[] = [];
   const mask = s.cablePhases[j] as number;
-  const toId = s.nodeIds[v] as string;
+  const toId = s.nodeIds.at(v);
   const currentInputs: WorkingInput[] = [];
   for (let p = 0; p < 3; p++) {
     if (!(mask & (1 << p))) continue;
@@ -113,10 +113,10 @@ export function cableWorking(s: DropState, j: number): Working[] {
     formula:
       'cumulative_p = Σ over the path of the segment drops on phase p; % = cumulative / U0 × 100; worst phase shown',
     inputs: pathTo(s, v).map((k) => ({
-      name: `drop ${s.cableIds[k]} ${PHASE_NAMES[worst.phase] ?? ''}`,
+      name: `drop ${s.cableIds.at(k)} ${PHASE_NAMES[worst.phase] ?? ''}`,
       value: s.dropProj[k * 3 + Math.max(0, worst.phase)] as number,
       unit: 'V',
-      source: `result: cable ${s.cableIds[k]} drop`,
+      source: `result: cable ${s.cableIds.at(k)} drop`,
     })),
     result: { value: (worst.volts / s.u0V) * 100, unit: `% of U0 = ${s.u0V} V` },
   });
@@ -145,7 +145,7 @@ export function cableWorking(s: DropState, j: number): Working[] {
 }
 
 function dropRecord(s: DropState, j: number, ib: number): Working {
-  const id = s.cableIds[j] as string;
+  const id = s.cableIds.at(j);
   const method = dropMethod(s, j);
   const mask = s.cablePhases[j] as number;
   const v = s.cableTo[j] as number;
@@ -260,7 +260,7 @@ function phaseAngle(p: number): number {
 
 /** Every record for one node (loads get their own extra records). */
 export function nodeWorking(s: DropState, v: number): Working[] {
-  const id = s.nodeIds[v] as string;
+  const id = s.nodeIds.at(v);
   if (!s.reached[v]) {
     return [
       {
@@ -294,10 +294,10 @@ export function nodeWorking(s: DropState, v: number): Working[] {
     inputs: [
       { name: 'U0', value: s.u0V, unit: 'V', source: s.voltageSource.u0 },
       ...path.map((k) => ({
-        name: `drop ${s.cableIds[k]} ${PHASE_NAMES[worst.phase] ?? ''}`,
+        name: `drop ${s.cableIds.at(k)} ${PHASE_NAMES[worst.phase] ?? ''}`,
         value: s.dropProj[k * 3 + Math.max(0, worst.phase)] as number,
         unit: 'V',
-        source: `result: cable ${s.cableIds[k]} drop`,
+        source: `result: cable ${s.cableIds.at(k)} drop`,
       })),
       ...voltages,
     ],
@@ -311,7 +311,7 @@ export function nodeWorking(s: DropState, v: number): Working[] {
 }
 
 function loadCurrentRecord(s: DropState, v: number): Working {
-  const id = s.nodeIds[v] as string;
+  const id = s.nodeIds.at(v);
   const el = s.nodes[v] as unknown as Record<string, unknown>;
   const demand = (el.demand ?? {}) as { value?: unknown; unit?: unknown };
   const three = el.phases === 3;
@@ -352,7 +352,7 @@ function loadCurrentRecord(s: DropState, v: number): Working {
 
 function loadRecords(s: DropState, v: number, path: number[]): Working[] {
   const verdict = judged(s, v);
-  const id = s.nodeIds[v] as string;
+  const id = s.nodeIds.at(v);
   const el = s.nodes[v] as unknown as Record<string, unknown>;
   const profile = s.profile;
   const category = el.category === 'other' ? 'other' : 'lighting';
@@ -410,10 +410,10 @@ function loadRecords(s: DropState, v: number, path: number[]): Working[] {
     title: 'Share of the drop by segment',
     formula: 'share = segment drop on the load’s worst phase / cumulative drop at the load',
     inputs: path.map((k) => ({
-      name: `${s.cableIds[k]}`,
+      name: `${s.cableIds.at(k)}`,
       value: (((s.dropProj[k * 3 + p] as number) / s.u0V) * 100) / (total || 1),
       unit: 'share',
-      source: `result: cable ${s.cableIds[k]} drop ${r4(((s.dropProj[k * 3 + p] as number) / s.u0V) * 100)} % of U0`,
+      source: `result: cable ${s.cableIds.at(k)} drop ${r4(((s.dropProj[k * 3 + p] as number) / s.u0V) * 100)} % of U0`,
     })),
     result: { value: total, unit: '% of U0 total' },
   });

@@ -206,7 +206,8 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
   const tag = 2 * v + 1;
   const zsOhm = hypot(out.loops.zhR, out.loops.zhX);
   const device = deviceOf(t.cables, a, j);
-  if (!device) out.unknown(tag, t.nodeIds[v]!, zsMsg.zsNoDeviceMessage(nodeName(t.nodes[v], t.nodeIds[v]!)));
+  if (!device)
+    out.unknown(tag, t.nodeIds.at(v), zsMsg.zsNoDeviceMessage(nodeName(t.nodes[v], t.nodeIds.at(v))));
   else {
     const requiredS = out.requiredS;
     const rcd = device.rcd;
@@ -216,11 +217,11 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
       if (pass !== true) {
         const ia = operatingCurrent(device, requiredS, fuses);
         const text = zsMsg.zsIaErrorMessage(
-          nodeName(t.nodes[v], t.nodeIds[v]!),
+          nodeName(t.nodes[v], t.nodeIds.at(v)),
           'error' in ia ? ia.error : '',
         );
-        if (pass === false) out.fail(tag, 'zs', t.nodeIds[v]!, text);
-        else out.unknown(tag, t.nodeIds[v]!, text);
+        if (pass === false) out.fail(tag, 'zs', t.nodeIds.at(v), text);
+        else out.unknown(tag, t.nodeIds.at(v), text);
       }
     } else {
       const zsMax = (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses);
@@ -229,29 +230,29 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
         out.fail(
           tag,
           'zs',
-          t.nodeIds[v]!,
-          zsMsg.zsFailMessage(nodeName(t.nodes[v], t.nodeIds[v]!), zsOhm, zsMax, requiredS),
+          t.nodeIds.at(v),
+          zsMsg.zsFailMessage(nodeName(t.nodes[v], t.nodeIds.at(v)), zsOhm, zsMax, requiredS),
         );
     }
     if (supply.earthing === 'TT') {
       const ra = supply.raOhm;
       if (!rcd || !(rcd.idnMa > 0))
-        out.unknown(tag, t.nodeIds[v]!, zsMsg.ttNoRcdMessage(nodeName(t.nodes[v], t.nodeIds[v]!)));
+        out.unknown(tag, t.nodeIds.at(v), zsMsg.ttNoRcdMessage(nodeName(t.nodes[v], t.nodeIds.at(v))));
       else if (ra === undefined)
-        out.unknown(tag, t.nodeIds[v]!, zsMsg.ttNoRaMessage(nodeName(t.nodes[v], t.nodeIds[v]!)));
+        out.unknown(tag, t.nodeIds.at(v), zsMsg.ttNoRaMessage(nodeName(t.nodes[v], t.nodeIds.at(v))));
       else {
         const volts = ra * (rcd.idnMa / 1000);
         if (!(volts <= 50))
           out.fail(
             tag,
             'rcdTouch',
-            t.nodeIds[v]!,
-            zsMsg.ttFailMessage(nodeName(t.nodes[v], t.nodeIds[v]!), volts),
+            t.nodeIds.at(v),
+            zsMsg.ttFailMessage(nodeName(t.nodes[v], t.nodeIds.at(v)), volts),
           );
       }
     }
   }
-  if (t.loadMotor[v] && t.nodeKind[v] === KIND_LOAD && ctx.results.loads[t.nodeIds[v]!]) {
+  if (t.loadMotor[v] && t.nodeKind[v] === KIND_LOAD && ctx.results.loads[t.nodeIds.at(v)]) {
     const motor = motorStartFor(
       t.nodes[v] as Load,
       ctx.results,
@@ -261,8 +262,8 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
     );
     if (motor) {
       out.motors.set(v, motor);
-      if (motor.check.pass === false) out.fail(tag, 'motorDip', t.nodeIds[v]!, motor.check.message);
-      else if (motor.check.pass === null) out.unknown(tag, t.nodeIds[v]!, motor.check.message);
+      if (motor.check.pass === false) out.fail(tag, 'motorDip', t.nodeIds.at(v), motor.check.message);
+      else if (motor.check.pass === null) out.unknown(tag, t.nodeIds.at(v), motor.check.message);
     }
   }
 }

@@ -5,6 +5,7 @@
  * object is built), otherwise from the result objects (results made by hand in tests).
  */
 import type { Cable, NodeElement, ProjectDocument } from '../../model/types.ts';
+import { IdList, type IdsByPosition } from '../idList.ts';
 import type { Results } from '../results.ts';
 import { dropStateOf } from '../solveDrop.ts';
 import { cableRow, type DropState } from '../dropState.ts';
@@ -38,7 +39,7 @@ export interface TreeInputs {
   /** Node kind codes (dropState KIND_*). */
   nodeKind: Uint8Array;
   /** The id of each fed node (so the checks need not read the node). */
-  nodeIds: readonly string[];
+  nodeIds: IdsByPosition;
   /** 1 where a load has motor starting data. */
   loadMotor: Uint8Array;
   /** 1 where the results hold an entry for the cable; null where every fed cable has one. */
@@ -99,11 +100,11 @@ function fromDropState(doc: ProjectDocument, results: Results): TreeInputs | und
     xOhmPerM: (j) => dropXOhmPerM(s, j, (cables[j] as { parallel?: unknown }).parallel),
     cableOf: (id) => {
       const j = s.cableIndex.get(id);
-      return j !== undefined && cableIds[j] === id ? j : -1;
+      return j !== undefined && cableIds.at(j) === id ? j : -1;
     },
     nodeOf: (id) => {
       const v = s.nodeIndex.get(id);
-      return v !== undefined && nodeIds[v] === id ? v : -1;
+      return v !== undefined && nodeIds.at(v) === id ? v : -1;
     },
   };
 }
@@ -119,12 +120,12 @@ function fromResultObjects(doc: ProjectDocument, results: Results): TreeInputs {
   const m = cables.length;
   const nodeIndex = new Map<string, number>();
   const nodeKind = new Uint8Array(n).fill(KIND_INVALID);
-  const nodeIds = new Array<string>(n);
+  const nodeIds = new IdList(n);
   const loadMotor = new Uint8Array(n);
   for (let i = 0; i < n; i++) {
     const node = nodes[i]!;
     nodeIndex.set(node.id, i);
-    nodeIds[i] = node.id;
+    nodeIds.set(i, node.id);
     nodeKind[i] = KINDS[node.kind] ?? KIND_INVALID;
     if (node.kind === 'load' && node.motor) loadMotor[i] = 1;
   }
