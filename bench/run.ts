@@ -44,6 +44,8 @@ interface Case {
   travT: number[];
   /** Per round, the median solve time of this size in that round. */
   roundSolve: number[];
+  /** Per round, the median bare traversal time of this size in that round. */
+  roundTrav: number[];
 }
 
 const ROUNDS = 25;
@@ -55,7 +57,7 @@ let sink = 0;
  * median over rounds of the 100k solve over the 10k solve of the same round (each the median of
  * its block); the ratio to the traversal is the ratio of the medians, measured in the same blocks.
  */
-function measureAll(): { rows: Row[]; pairedScaling: number } {
+function measureAll(): { rows: Row[]; pairedScaling: number; traversalScaling: number } {
   const cases: Case[] = SIZES.map((elements) => ({
     doc: randomNetwork(elements, 20261201),
     repeats: elements >= 100000 ? 3 : elements >= 10000 ? 5 : 15,
@@ -63,6 +65,7 @@ function measureAll(): { rows: Row[]; pairedScaling: number } {
     dropT: [],
     travT: [],
     roundSolve: [],
+    roundTrav: [],
   }));
   // Warm up every path so the timed rounds compare compiled code.
   for (const c of cases)
@@ -74,14 +77,18 @@ function measureAll(): { rows: Row[]; pairedScaling: number } {
   for (let round = 0; round < ROUNDS; round++)
     for (const c of cases) {
       const inRound: number[] = [];
+      const travInRound: number[] = [];
       for (let k = 0; k < c.repeats; k++) {
-        c.travT.push(time(() => (sink += bareTraversal(c.doc))));
+        const tt = time(() => (sink += bareTraversal(c.doc)));
+        c.travT.push(tt);
+        travInRound.push(tt);
         const t = time(() => solve(c.doc));
         c.solveT.push(t);
         inRound.push(t);
         c.dropT.push(time(() => solveDrop(c.doc)));
       }
       c.roundSolve.push(median(inRound));
+      c.roundTrav.push(median(travInRound));
     }
   if (sink < 0) console.log(sink);
   const rows = cases.map((c) => ({
@@ -93,7 +100,9 @@ function measureAll(): { rows: Row[]; pairedScaling: number } {
   const big = cases[cases.length - 1] as Case;
   const ten = cases[SIZES.indexOf(10000)] as Case;
   const pairedScaling = median(big.roundSolve.map((t, k) => t / (ten.roundSolve[k] as number)));
-  return { rows, pairedScaling };
+  // The same pairing for the baseline: how much of the growth the machine gives any walk of the tree.
+  const traversalScaling = median(big.roundTrav.map((t, k) => t / (ten.roundTrav[k] as number)));
+  return { rows, pairedScaling, traversalScaling };
 }
 
 async function editorBench(): Promise<object | undefined> {
@@ -103,7 +112,7 @@ async function editorBench(): Promise<object | undefined> {
   return mod.runEditorBench ? await mod.runEditorBench() : undefined;
 }
 
-const { rows, pairedScaling: scaling } = measureAll();
+const { rows, pairedScaling: scaling, traversalScaling } = measureAll();
 const last = rows[rows.length - 1] as Row;
 const tenK = rows[SIZES.indexOf(10000)] as Row;
 const ratio = last.solveMs / last.traversalMs;
@@ -122,6 +131,7 @@ if (json) {
     ratioAt100k: ratio,
     scaling10kTo100k: scaling,
     scalingOfMedians: last.solveMs / tenK.solveMs,
+    traversalScaling10kTo100k: traversalScaling,
     rounds: ROUNDS,
     targets: { ratioAt100k: TARGET_RATIO, scaling10kTo100k: TARGET_SCALING },
     baseline,
@@ -142,6 +152,9 @@ if (json) {
     `At ${last.elements} elements: solve is ${ratio.toFixed(2)}x the traversal (target <= ${TARGET_RATIO}x); ` +
       `10k -> 100k scaling ${scaling.toFixed(2)}x (target <= ${TARGET_SCALING}x; median of ${ROUNDS} paired rounds, ` +
       `${(last.solveMs / tenK.solveMs).toFixed(2)}x from the medians).`,
+  );
+  console.log(
+    `The bare traversal grows ${traversalScaling.toFixed(2)}x from 10k to 100k in the same rounds (paired the same way).`,
   );
   if (editor !== undefined) console.log('Editor:', JSON.stringify(editor));
 }
