@@ -3,6 +3,7 @@
  * loads, single- and three-phase, with a seeded generator so every run measures the same trees.
  */
 import type { Cable, NodeElement, ProjectDocument } from '../src/model/types.ts';
+import { MAX_PARALLEL } from '../src/model/bounds.ts';
 import { baseSettings } from '../tests/fixtures/build.ts';
 import { BREAKER_RATINGS_A, MCCB_RATINGS_A, nextRating } from '../src/catalogue/devices.ts';
 
@@ -56,7 +57,7 @@ function sizeFeeders(nodes: NodeElement[], cables: Cable[]): void {
     if (size !== undefined) c.sizeMm2 = size;
     else {
       c.sizeMm2 = 240;
-      c.parallel = Math.min(50, Math.ceil(needMm2 / 240));
+      c.parallel = Math.min(MAX_PARALLEL, Math.ceil(needMm2 / 240));
     }
   }
 }

@@ -7,6 +7,7 @@
  * of 0 m, a size missing from the data set, a loop) are the solver's findings, not file errors.
  */
 import * as z from 'zod';
+import { MAX_PARALLEL } from './bounds.ts';
 import type { ProjectDocument } from './types.ts';
 import { FORMAT_ID, FORMAT_VERSION } from './types.ts';
 import { idProblem } from './ids.ts';
@@ -151,7 +152,7 @@ const cableBody = {
   sizeMm2: positive().describe('Line conductor cross-section, mm².'),
   cpc: cpcSchema,
   phases: phaseCount,
-  parallel: z.number().int().min(1).max(50),
+  parallel: z.number().int().min(1).max(MAX_PARALLEL),
   device: deviceSchema.optional(),
   installation: installationSchema.optional(),
 };

@@ -70,7 +70,7 @@ export interface DropState {
   cableRowAt: Int32Array;
   /** The conductor rows the cables use; `rows[0]` is none. */
   rows: (ConductorRow | undefined)[];
-  /** A valid parallel count (1 to 100), 0 where invalid: with the row and length it gives the segment's impedance. */
+  /** A valid parallel count (1 to MAX_PARALLEL), 0 where invalid: with the row and length it gives the segment's impedance. */
   cableParallel: Uint8Array;
   /** Valid one-way length, 0 where invalid. */
   cableLengthM: Float64Array;

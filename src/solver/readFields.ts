@@ -5,6 +5,7 @@
  * which run on reached elements in the solver's usual order, write the finding.
  */
 import type { CatalogueSet, ConductorRow } from '../catalogue/catalogueSet.ts';
+import { MAX_PARALLEL } from '../model/bounds.ts';
 import { findConductor } from '../catalogue/conductorLookup.ts';
 import type { DropState } from './dropState.ts';
 import { KIND_BOARD, KIND_LOAD } from './dropState.ts';
@@ -153,7 +154,7 @@ export function readCable(s: DropState, j: number, c: Loose, rows: RowMemo): voi
   const okLength = typeof lengthM === 'number' && Number.isFinite(lengthM) && lengthM > 0;
   if (okLength) s.cableLengthM[j] = lengthM;
   const p = c.parallel;
-  const okParallel = typeof p === 'number' && Number.isInteger(p) && p >= 1 && p <= 100;
+  const okParallel = typeof p === 'number' && Number.isInteger(p) && p >= 1 && p <= MAX_PARALLEL;
   if (okParallel) s.cableParallel[j] = p;
   const at = rows.find(c.material, c.insulation, c.construction, c.sizeMm2);
   s.cableRowAt[j] = at;

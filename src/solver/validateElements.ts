@@ -6,6 +6,7 @@
  * diversity falls back to 1.
  */
 import { sizesFor } from '../catalogue/conductorLookup.ts';
+import { MAX_PARALLEL } from '../model/bounds.ts';
 import type { DropState } from './dropState.ts';
 import { KIND_BOARD, PHASE_ANGLE } from './dropState.ts';
 import { shown } from './findings.ts';
@@ -37,12 +38,17 @@ export function validateCables(s: DropState): void {
         message: `cable ${id}: length must be a positive number of metres, got ${shown(c.lengthM)}. Loads below it are not judged until it is set.`,
       });
     const parallel = c.parallel;
-    if (!(typeof parallel === 'number' && Number.isInteger(parallel) && parallel >= 1 && parallel <= 100))
+    if (!(
+      typeof parallel === 'number' &&
+      Number.isInteger(parallel) &&
+      parallel >= 1 &&
+      parallel <= MAX_PARALLEL
+    ))
       findings.push({
         code: 'badParallel',
         severity: 'error',
         elementId: id,
-        message: `cable ${id}: parallel must be a whole number of cables from 1 to 100, got ${shown(parallel)}.`,
+        message: `cable ${id}: parallel must be a whole number of cables from 1 to ${MAX_PARALLEL}, got ${shown(parallel)}.`,
       });
     if (!s.cableRowAt[j]) {
       const sizes = sizesFor(s.catalogue, c.material, c.insulation, c.construction);

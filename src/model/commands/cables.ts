@@ -1,5 +1,6 @@
 import type { Cable, Id, ProjectDocument } from '../types.ts';
 import { fail, ok, type CommandResult } from './result.ts';
+import { MAX_PARALLEL } from '../bounds.ts';
 import { describeCable, describeNode } from './describe.ts';
 import { nextIdFor, documentIds } from '../ids.ts';
 import { newCable } from '../defaults.ts';
@@ -116,9 +117,12 @@ export function updateCable(doc: ProjectDocument, id: Id, patch: CablePatch): Co
       `${describeCable(cable)}: size must be a positive cross-section in mm², got ${patch.sizeMm2}.`,
     );
   }
-  if (patch.parallel !== undefined && !(Number.isInteger(patch.parallel) && patch.parallel >= 1)) {
+  if (
+    patch.parallel !== undefined &&
+    !(Number.isInteger(patch.parallel) && patch.parallel >= 1 && patch.parallel <= MAX_PARALLEL)
+  ) {
     return fail(
-      `${describeCable(cable)}: parallel must be a whole number of cables, 1 or more; got ${patch.parallel}.`,
+      `${describeCable(cable)}: parallel must be a whole number of cables from 1 to ${MAX_PARALLEL}; got ${patch.parallel}.`,
     );
   }
   const from = patch.from ?? cable.from;

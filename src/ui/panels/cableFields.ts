@@ -1,5 +1,6 @@
 /** The editable fields of a cable segment, its protective device and its installation. */
 import { standardSizes } from '../../catalogue/iec60228.ts';
+import { MAX_PARALLEL } from '../../model/bounds.ts';
 import { sizesWithCapacity } from '../../catalogue/capacityTables.ts';
 import type { Cable, InstallMethod, Installation, PhaseCount } from '../../model/types.ts';
 import type { FieldGroup, NumberField, NumberRule } from './fieldSpec.ts';
@@ -109,7 +110,7 @@ export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
         key: 'parallel',
         label: 'Cables in parallel',
         unit: '',
-        rule: { min: 1, max: 20, integer: true },
+        rule: { min: 1, max: MAX_PARALLEL, integer: true },
         get: (c) => c.parallel,
         set: (_c, parallel) => ({ parallel }),
       },
