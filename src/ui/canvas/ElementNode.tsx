@@ -16,17 +16,23 @@ function Badge({
   label,
   detail,
   feeds = false,
+  setBy = null,
 }: {
   status: Status | null;
   label: string;
   detail: number;
   /** A board's status is that of the worst load it feeds, not of its own figure. */
   feeds?: boolean;
+  /** The load that sets a board's close or over status, with its drop ("L27 5.90 %"). */
+  setBy?: string | null;
 }) {
   const look = statusLook(status);
-  const title = feeds
-    ? `${look.word}: the worst load fed from this board is ${look.meaning}; the figure is the board's own drop from the origin`
-    : `${look.word}: ${look.meaning}`;
+  const title = !feeds
+    ? `${look.word}: ${look.meaning}`
+    : setBy
+      ? `${look.word}: load ${setBy} is the worst fed from here, and it is ${look.meaning}; the first figure is this point's own drop from the origin`
+      : `${look.word}: the worst load fed from here is ${look.meaning}; the figure is this point's own drop from the origin`;
+  const text = label && setBy ? `${label} · ${setBy}` : label;
   return (
     <span
       className={`ed-badge ed-badge-${status ?? 'none'}`}
@@ -35,8 +41,8 @@ function Badge({
       data-testid="node-badge"
     >
       <span aria-hidden="true">{look.glyph}</span>
-      {detail > 0 && label ? (
-        <span className="ed-badge-text">{label}</span>
+      {detail > 0 && text ? (
+        <span className="ed-badge-text">{text}</span>
       ) : (
         <span className="ed-sr">{look.word}</span>
       )}
@@ -45,7 +51,7 @@ function Badge({
 }
 
 function ElementNodeView({ data, selected }: NodeProps<ElementFlowNode>) {
-  const { element, status, label, detail, problem } = data;
+  const { element, status, label, detail, problem, setBy } = data;
   const cls = `ed-node ed-node-${element.kind}${selected ? ' is-selected' : ''}${problem ? ' has-problem' : ''}`;
   return (
     <div
@@ -78,7 +84,7 @@ function ElementNodeView({ data, selected }: NodeProps<ElementFlowNode>) {
           <span className="ed-busbar" />
           <span className="ed-board-name">{detail > 0 ? element.name : ''}</span>
           <span className="ed-board-foot">
-            <Badge status={status} label={label} detail={detail} feeds />
+            <Badge status={status} label={label} detail={detail} feeds setBy={setBy} />
           </span>
         </>
       )}

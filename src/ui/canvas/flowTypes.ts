@@ -12,6 +12,11 @@ export type ElementNodeData = {
   detail: Detail;
   /** Over-limit or error findings on this element, for a marker and its tooltip. */
   problem: string | null;
+  /**
+   * For a board or junction shown close or over in a drop view: the load that sets that status
+   * ("L27 5.90 %"), named on the badge beside the node's own figure. Null otherwise.
+   */
+  setBy: string | null;
 };
 
 export type CableEdgeData = {

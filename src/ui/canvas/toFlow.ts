@@ -22,6 +22,15 @@ import type { Status } from '../../solver/results.ts';
 import { labelRaises } from './labelLayout.ts';
 import type { CableEdgeData, CableFlowEdge, Detail, ElementFlowNode, ElementNodeData } from './flowTypes.ts';
 import { Position as Side } from '@xyflow/react';
+import { worstLoadsFed, type WorstFed } from './worstFed.ts';
+
+/** Label modes in which a board shows the drop status of the worst load it feeds. */
+const DROP_STATUS_MODES: readonly LabelMode[] = ['drop', 'current', 'capacity'];
+
+/** "L27 5.90 %": the load that sets a status, and its cumulative drop. */
+function setByText(w: WorstFed | undefined): string | null {
+  return w ? `${w.loadId} ${fmt(w.load.cumulativePct.value, 2)} %` : null;
+}
 
 export interface FlowInputs {
   doc: ProjectDocument;
@@ -69,7 +78,8 @@ function sameData(a: ElementNodeData, b: ElementNodeData): boolean {
     a.status === b.status &&
     a.label === b.label &&
     a.detail === b.detail &&
-    a.problem === b.problem
+    a.problem === b.problem &&
+    a.setBy === b.setBy
   );
 }
 
@@ -128,6 +138,7 @@ export function createFlowBuilder() {
     const issues = problems(results);
     const closeShare = doc.settings.closeThreshold;
     const devices = labelMode === 'fault' ? deviceStatusAtNodes(input) : null;
+    const worst = DROP_STATUS_MODES.includes(labelMode) ? worstLoadsFed(doc, results) : null;
     const next = new Map<Id, ElementFlowNode>();
     const list = doc.nodes.map((element) => {
       const r = results.nodes[element.id];
@@ -137,6 +148,7 @@ export function createFlowBuilder() {
         label: showLabels ? nodeLabel(r, labelMode) : '',
         detail,
         problem: issues.get(element.id) ?? null,
+        setBy: element.kind === 'load' || !worst ? null : setByText(worst.get(element.id)),
       };
       const position = dragPositions?.[element.id] ?? element.position;
       const isSelected = selected.has(element.id);
@@ -179,11 +191,16 @@ export function createFlowBuilder() {
       return up !== undefined && down !== undefined && up !== 'load' && down !== 'supply';
     });
     const byId = new Map(doc.nodes.map((n) => [n.id, n]));
+    // A sub-main shown close or over names the load that makes it so, as its board's badge does.
+    const worst = labelMode === 'drop' ? worstLoadsFed(doc, results) : null;
     const texts = drawable.map((cable) => {
       const r = results.cables[cable.id];
       const far = results.nodes[cable.to];
       const to = byId.get(cable.to)!;
-      const full = cable.lengthM > 0 ? cableLabel(r, labelMode, far) : ['length not set'];
+      let full = cable.lengthM > 0 ? cableLabel(r, labelMode, far) : ['length not set'];
+      const setBy = to.kind !== 'load' && cable.lengthM > 0 ? worst?.get(cable.to) : undefined;
+      if (setBy && full.length > 0)
+        full = [...full.slice(0, -1), `${full[full.length - 1]} · ${setBy.loadId}`];
       const short = cable.lengthM > 0 ? cableShortLabel(r, labelMode, far) : 'length not set';
       const named = cable.name && cable.name !== cable.id && cable.name !== to.name;
       const length = cable.lengthM > 0 ? ` · ${fmtLength(cable.lengthM)} m` : '';

@@ -115,3 +115,40 @@ describe('status styling follows the label mode', () => {
     }
   });
 });
+
+describe('what sets a board status', () => {
+  function demoInputs(labelMode: FlowInputs['labelMode']): FlowInputs {
+    const parsed = parseDocument(
+      readFileSync(new URL('../../../public/demo-project.json', import.meta.url), 'utf8'),
+    );
+    if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+    return { ...inputs(), doc: parsed.doc, results: solve(parsed.doc), labelMode };
+  }
+
+  test('a board shown over names the worst load it feeds, with that load’s own drop', () => {
+    const i = demoInputs('drop');
+    const nodes = createFlowBuilder().nodes(i);
+    // The demo's worst load is L27 (over its 5 % limit); the main board and the timber store board feed it.
+    const worst = Object.entries(i.results.loads).sort((a, b) => b[1].budgetUsed - a[1].budgetUsed)[0]!;
+    expect(worst[1].status).toBe('over');
+    const text = `${worst[0]} ${worst[1].cumulativePct.value.toFixed(2)} %`;
+    for (const id of ['MB', 'DB4']) {
+      const n = nodes.find((x) => x.id === id)!;
+      expect(n.data.status).toBe('over');
+      expect(n.data.setBy).toBe(text);
+    }
+    // A board whose loads are all clear needs no explaining; a load never names another.
+    const clear = nodes.find((x) => x.data.element.kind === 'board' && x.data.status === 'within');
+    if (clear) expect(clear.data.setBy).toBeNull();
+    for (const n of nodes.filter((x) => x.data.element.kind === 'load')) expect(n.data.setBy).toBeNull();
+    // The sub-main into the store board names the same load at the end of its label.
+    const edges = createFlowBuilder().edges(i);
+    const into = edges.find((e) => e.target === 'DB4')!;
+    expect(into.data!.lines.at(-1)).toMatch(new RegExp(`· ${worst[0]}$`));
+  });
+
+  test('outside the drop views no load is named', () => {
+    const nodes = createFlowBuilder().nodes(demoInputs('zs'));
+    for (const n of nodes) expect(n.data.setBy).toBeNull();
+  });
+});
