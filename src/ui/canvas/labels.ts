@@ -207,7 +207,7 @@ export function statusBasis(mode: LabelMode): { short: string; long: string } {
     case 'fault':
       return {
         short: 'fault level against breaking capacity',
-        long: 'Prospective fault current where each device sits against its breaking capacity; a board shows the worst device it holds, a load the device protecting it.',
+        long: 'Prospective fault current where each device sits against its breaking capacity; a board shows the worst device it holds, a load or a cable beyond a junction the device protecting it.',
       };
     case 'capacity':
       return {

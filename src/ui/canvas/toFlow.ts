@@ -117,6 +117,17 @@ export function createFlowBuilder() {
   }
 
   /**
+   * The breaking-capacity status of the device that protects cable `id`: its own, or for a segment
+   * beyond a junction (no device of its own) the upstream device's, as a load is judged.
+   */
+  function faultStatus(results: Results, id: Id, close: number): Status | null {
+    const r = results.cables[id];
+    const own = cableStatus(r, 'fault', undefined, close);
+    const by = r?.protection?.deviceCableId;
+    return own ?? (by && by !== id ? cableStatus(results.cables[by], 'fault', undefined, close) : null);
+  }
+
+  /**
    * In fault-level mode a point is judged by the devices that must break a fault there: a board
    * by the worst device it holds (on the cables leaving it), a load by the device protecting it.
    */
@@ -125,7 +136,7 @@ export function createFlowBuilder() {
     const close = doc.settings.closeThreshold;
     const kinds = new Map(doc.nodes.map((n) => [n.id, n.kind]));
     for (const c of doc.cables) {
-      const s = cableStatus(results.cables[c.id], 'fault', undefined, close);
+      const s = faultStatus(results, c.id, close);
       out.set(c.from, worseStatus(out.get(c.from) ?? null, s));
       if (kinds.get(c.to) === 'load') out.set(c.to, worseStatus(out.get(c.to) ?? null, s));
     }
@@ -226,7 +237,10 @@ export function createFlowBuilder() {
     const list = texts.map(({ cable, r, to, full, short, heading }) => {
       const data: CableEdgeData = {
         cable,
-        status: cableStatus(r, labelMode, results.nodes[cable.to], doc.settings.closeThreshold),
+        status:
+          labelMode === 'fault'
+            ? faultStatus(results, cable.id, doc.settings.closeThreshold)
+            : cableStatus(r, labelMode, results.nodes[cable.to], doc.settings.closeThreshold),
         lines: showLabels ? full : [],
         short: showLabels ? short : '',
         heading,

@@ -152,3 +152,30 @@ describe('what sets a board status', () => {
     for (const n of nodes) expect(n.data.setBy).toBeNull();
   });
 });
+
+describe('fault view beyond a junction', () => {
+  test('a segment with no device of its own shows the device that protects it, as its load does', async () => {
+    const { newCable, newJunction, newLoad, newProject } = await import('../../../src/model/defaults.ts');
+    const doc = newProject();
+    doc.nodes.push(newJunction('J1', { x: 0, y: 100 }), newLoad('L1', { x: 0, y: 200 }, 'sockets'));
+    doc.cables.push(
+      newCable('C1', 'S1', 'J1', undefined, {
+        lengthM: 10,
+        device: { type: 'mcb', curve: 'B', ratingA: 20, breakingKa: 10 },
+      }),
+      newCable('C2', 'J1', 'L1', undefined, { lengthM: 10 }),
+    );
+    const results = solve(doc);
+    expect(results.cables['C2']!.protection!.deviceCableId).toBe('C1');
+    const i: FlowInputs = { ...inputs(), doc, results, labelMode: 'fault' };
+    const edges = createFlowBuilder().edges(i);
+    const c1 = edges.find((e) => e.id === 'C1')!.data!.status;
+    expect(c1).not.toBeNull();
+    expect(edges.find((e) => e.id === 'C2')!.data!.status).toBe(c1);
+    expect(
+      createFlowBuilder()
+        .nodes(i)
+        .find((n) => n.id === 'L1')!.data.status,
+    ).toBe(c1);
+  });
+});
