@@ -336,6 +336,24 @@ describe('correction factors', () => {
     expect(groupingFactor('bunched', 10)?.factor).toBe(0.45);
     expect(groupingFactor('bunched', 21)).toBeUndefined();
   });
+  it('grouping underground, cables or ducts touching: direct 2 -> 0.75, 6 -> 0.50, 20 -> 0.29 (IEC B.52.18); ducts 2 -> 0.85, 6 -> 0.60 (IEC B.52.19); from memory', () => {
+    // Any arrangement (it describes groups in air) gives way to the buried table.
+    expect(groupingFactor('bunched', 2, 'buriedDirect')?.factor).toBe(0.75);
+    expect(groupingFactor('tray', 6, 'buriedDirect')?.factor).toBe(0.5);
+    expect(groupingFactor('bunched', 20, 'buriedDirect')?.factor).toBe(0.29);
+    expect(groupingFactor('bunched', 2, 'buriedDuct')?.factor).toBe(0.85);
+    expect(groupingFactor('singleLayer', 6, 'buriedDuct')?.factor).toBe(0.6);
+    expect(groupingFactor('bunched', 10, 'buriedDirect')).toMatchObject({ factor: 0.36, usedAt: 12 });
+    expect(groupingFactor('bunched', 21, 'buriedDuct')).toBeUndefined();
+    expect(groupingFactor('bunched', 3, 'buriedDirect')?.source).toMatch(/B\.52\.18.*touching/);
+    // Common practice: touching is the most onerous spacing, so each buried cell is at or below
+    // the bunched-in-air one for the same count, and both fall as the count grows.
+    for (const n of [2, 3, 4, 5, 6, 7, 8, 9, 12, 16, 20]) {
+      const direct = groupingFactor('bunched', n, 'buriedDirect')!.factor;
+      expect(direct).toBeLessThanOrEqual(groupingFactor('bunched', n)!.factor);
+      expect(direct).toBeLessThan(groupingFactor('bunched', n - 1, 'buriedDirect')!.factor + 1e-9);
+    }
+  });
 });
 
 describe('Iz = It x Ca x Cg x Ci', () => {

@@ -74,10 +74,11 @@ export function capacityFigures(
       error: `ambient ${inst.ambientC} °C is beyond the correction table for ${cable.insulation} insulation: lower the ambient or use higher-temperature insulation`,
     };
   }
-  const group = groupingFactor(inst.groupArrangement, inst.groupedCircuits);
+  const group = groupingFactor(inst.groupArrangement, inst.groupedCircuits, inst.method);
   if (!group) {
+    const buried = inst.method === 'buriedDirect' || inst.method === 'buriedDuct';
     return {
-      error: `grouping of ${inst.groupedCircuits} bunched circuits is beyond the grouping table (20): split the group or enter a factor from a licensed table`,
+      error: `grouping of ${inst.groupedCircuits} ${buried ? 'buried' : 'bunched'} circuits is beyond the grouping table (20): split the group or enter a factor from a licensed table`,
     };
   }
   const ci = inst.insulationFactor > 0 ? Math.min(1, inst.insulationFactor) : 1;
@@ -103,7 +104,7 @@ export function cableCapacity(
   const buried = inst.method === 'buriedDirect' || inst.method === 'buriedDuct';
   if (buried && inst.groupedCircuits > 1) {
     notes.push(
-      'buried circuits grouped: the air-grouping factor is used; check against the buried-grouping table',
+      'buried circuits grouped: the factor is for cables (or ducts) touching; with a known spacing a licensed table may allow more',
     );
   }
   if (n > 1) notes.push(`${n} cables in parallel, taken as sharing current equally`);
@@ -127,7 +128,14 @@ export function cableCapacity(
           `${cell.table.title}, column ${cell.column.label}, ${loaded} loaded conductors`,
         ],
         ['Ca', temp.factor, '', `${temp.source} at ${temp.usedAt} °C (ambient ${inst.ambientC} °C)`],
-        ['Cg', group.factor, '', `${group.source}, ${inst.groupArrangement}, ${group.usedAt} circuits`],
+        [
+          'Cg',
+          group.factor,
+          '',
+          buried
+            ? `${group.source}, ${group.usedAt} circuits`
+            : `${group.source}, ${inst.groupArrangement}, ${group.usedAt} circuits`,
+        ],
         ['Ci', ci, '', 'installation.insulationFactor'],
         ...(n > 1 ? [['n', n, 'cables', 'cable.parallel'] as const] : []),
       ],

@@ -216,7 +216,11 @@ export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
         key: 'installation.groupArrangement',
         label: 'Grouping arrangement',
         options: ARRANGEMENT_OPTIONS,
-        shown: (c) => c.installation !== undefined,
+        // Underground the buried grouping tables apply whatever the arrangement (docs/protection.md).
+        shown: (c) =>
+          c.installation !== undefined &&
+          c.installation.method !== 'buriedDirect' &&
+          c.installation.method !== 'buriedDuct',
         get: (c) => c.installation?.groupArrangement ?? 'bunched',
         set: (c, v) => ({
           installation: {

@@ -62,3 +62,25 @@ describe('methodOptions', () => {
     expect(unmarked(options)).toContain('clippedDirect');
   });
 });
+
+describe('grouping arrangement field', () => {
+  test('offered for cables in air, not underground, where the buried tables apply', async () => {
+    const { CABLE_FIELDS } = await import('../../../../src/ui/panels/cableFields.ts');
+    const field = CABLE_FIELDS.flatMap((g) => g.fields).find(
+      (f) => f.key === 'installation.groupArrangement',
+    )!;
+    const at = (method: 'clippedDirect' | 'buriedDirect' | 'buriedDuct') =>
+      newCable('C', 'A', 'B', undefined, {
+        installation: {
+          method,
+          ambientC: 20,
+          groupedCircuits: 3,
+          groupArrangement: 'bunched',
+          insulationFactor: 1,
+        },
+      });
+    expect(field.shown?.(at('clippedDirect'))).toBe(true);
+    expect(field.shown?.(at('buriedDirect'))).toBe(false);
+    expect(field.shown?.(at('buriedDuct'))).toBe(false);
+  });
+});
