@@ -205,7 +205,13 @@ export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
           installation: { ...INSTALLATION_OFFER, ...c.installation, method: v as Installation['method'] },
         }),
       },
-      installNumber('ambientC', 'Ambient temperature', '°C', { min: -30, max: 80 }),
+      installNumber(
+        'ambientC',
+        'Ambient temperature',
+        '°C',
+        { min: -30, max: 80 },
+        'Of the air around the cable; for a buried cable, of the ground (its tables are at 20 °C, not 30 °C).',
+      ),
       installNumber('groupedCircuits', 'Circuits grouped (this one included)', '', {
         min: 1,
         max: 100,
