@@ -15,6 +15,16 @@ import type {
 
 export type Status = 'within' | 'close' | 'over';
 
+/**
+ * The word a person reads for each status, in the editor, the report and the working alike; the
+ * status values themselves (`within`, `close`, `over`) are the file and JSON vocabulary.
+ */
+export const STATUS_SHOWN: Readonly<Record<Status, string>> = {
+  within: 'clear',
+  close: 'tight',
+  over: 'over',
+};
+
 /** A percentage always says what it is a percentage of. */
 export interface Percent {
   value: number;

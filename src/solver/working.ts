@@ -3,7 +3,7 @@
  * source, result. Nothing here runs during a solve, so a 100,000-element network pays only for
  * the records someone opens.
  */
-import type { Working, WorkingInput } from './results.ts';
+import { STATUS_SHOWN, type Working, type WorkingInput } from './results.ts';
 import type { DropState } from './dropState.ts';
 import { KIND_BOARD, KIND_LOAD, cableRow, dropCurrentScale } from './dropState.ts';
 import { PHASE_NAMES, dropMethod, pathTo, phasesOf, worstCablePhase, worstNodeCum } from './dropMethod.ts';
@@ -421,7 +421,7 @@ function loadRecords(s: DropState, v: number, path: number[]): Working[] {
   out.push({
     key: 'status',
     title: 'Status',
-    formula: `over when budget used > 1; close when ≥ ${s.closeThreshold}; else within (budget used = cumulative / limit${profile.branchPct !== undefined ? ', or branch drop / branch limit if larger' : ''})`,
+    formula: `${STATUS_SHOWN.over} when budget used > 1; ${STATUS_SHOWN.close} when ≥ ${s.closeThreshold}; else ${STATUS_SHOWN.within} (budget used = cumulative / limit${profile.branchPct !== undefined ? ', or branch drop / branch limit if larger' : ''})`,
     inputs: [
       { name: 'budget used', value: verdict.used, unit: '', source: 'cumulative / limit' },
       {
@@ -431,7 +431,10 @@ function loadRecords(s: DropState, v: number, path: number[]): Working[] {
         source: 'document: settings closeThreshold',
       },
     ],
-    result: { value: status < 0 ? 'not judged' : (['within', 'close', 'over'][status] as string), unit: '' },
+    result: {
+      value: status < 0 ? 'not judged' : STATUS_SHOWN[(['within', 'close', 'over'] as const)[status]!],
+      unit: '',
+    },
   });
   return out;
 }

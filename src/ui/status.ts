@@ -4,7 +4,7 @@
  * differ in lightness as well as hue (teal / ochre / plum), which keeps them apart for the common
  * forms of colour blindness and in greyscale print.
  */
-import type { Status } from '../solver/results.ts';
+import { STATUS_SHOWN, type Status } from '../solver/results.ts';
 
 export interface StatusLook {
   /** Our word for it, shown to the user. */
@@ -22,7 +22,7 @@ export interface StatusLook {
 
 export const STATUS_LOOK: Record<Status | 'none', StatusLook> = {
   within: {
-    word: 'clear',
+    word: STATUS_SHOWN.within,
     meaning: 'within its limit',
     glyph: '✓',
     colour: '#17707d',
@@ -31,7 +31,7 @@ export const STATUS_LOOK: Record<Status | 'none', StatusLook> = {
     strokeWidth: 2,
   },
   close: {
-    word: 'tight',
+    word: STATUS_SHOWN.close,
     meaning: 'close to its limit (above the close-to-limit share of its budget)',
     glyph: '▲',
     colour: '#b06f00',
@@ -40,7 +40,7 @@ export const STATUS_LOOK: Record<Status | 'none', StatusLook> = {
     strokeWidth: 2.5,
   },
   over: {
-    word: 'over',
+    word: STATUS_SHOWN.over,
     meaning: 'over its limit',
     glyph: '✕',
     colour: '#8e1f5c',

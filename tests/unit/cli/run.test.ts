@@ -108,3 +108,19 @@ test('the report uses the same status words and glyphs as the editor', () => {
     expect(STATUS_TEXT[s]).toBe(`${STATUS_LOOK[s].glyph} ${STATUS_LOOK[s].word}`);
   }
 });
+
+test('the working names a status with the word the report and the editor show', async () => {
+  const { readFileSync } = await import('node:fs');
+  const { parseDocument } = await import('../../../src/model/parseDocument.ts');
+  const { solve } = await import('../../../src/solver/solve.ts');
+  const parsed = parseDocument(readFileSync('public/demo-project.json', 'utf8'));
+  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+  const results = solve(parsed.doc);
+  for (const [id, load] of Object.entries(results.loads)) {
+    if (load.status === null) continue;
+    const record = results.loads[id]!.working.find((w) => w.key === 'status')!;
+    expect(record.result.value).toBe(STATUS_LOOK[load.status].word);
+    expect(STATUS_TEXT[load.status]).toContain(String(record.result.value));
+    expect(record.formula).toMatch(/^over when .*; tight when .*; else clear /);
+  }
+});
