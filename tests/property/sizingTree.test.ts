@@ -10,7 +10,7 @@ import type { ProjectDocument } from '../../src/model/types.ts';
 import { solve } from '../../src/solver/solve.ts';
 import { proposeTreeSizing } from '../../src/solver/sizing/proposeTreeSizing.ts';
 import { proposeCableSize } from '../../src/solver/sizing/proposeCableSize.ts';
-import { failingSizingChecks } from '../../src/solver/sizing/sizingCore.ts';
+import { DEFAULT_SIZING, failingSizingChecks } from '../../src/solver/sizing/sizingCore.ts';
 import type { SizeChange } from '../../src/solver/sizing/sizingCore.ts';
 import { clipped } from '../unit/protection/workedDoc.ts';
 
@@ -117,6 +117,32 @@ describe('tree sizing', () => {
     );
     // The property must bite: most random networks get a passing design.
     expect(passing).toBeGreaterThan(6);
+  });
+});
+
+describe('tree sizing with a terminal limit on final circuits', () => {
+  it('never gives a final circuit more than the limit, and what it says passes does pass', () => {
+    let capped = 0;
+    fc.assert(
+      fc.property(network, fc.constantFrom(2.5, 4, 6), (n, maxFinalMm2) => {
+        const doc = build(n);
+        const r = proposeTreeSizing(doc, { ...DEFAULT_SIZING, maxFinalMm2 });
+        expect(r.maxFinalMm2).toBe(maxFinalMm2);
+        const applied = apply(doc, r.changes);
+        for (const c of applied.cables) {
+          const drawn = doc.cables.find((x) => x.id === c.id)!;
+          // Finals are the F cables (board to load); sub-mains are not limited.
+          if (c.id.startsWith('F') && c.sizeMm2 !== drawn.sizeMm2) {
+            expect(c.sizeMm2).toBeLessThanOrEqual(maxFinalMm2);
+            capped++;
+          }
+        }
+        if (r.passes) expect(failingSizingChecks(solve(applied))).toEqual([]);
+      }),
+      { numRuns: 10, seed: 777 },
+    );
+    // The property must bite: some final circuits were resized under the limit.
+    expect(capped).toBeGreaterThan(0);
   });
 });
 

@@ -9,6 +9,7 @@ import {
   candidateSizes,
   DEFAULT_SIZING,
   diffSizes,
+  sizeCeilings,
   withSizes,
   type SizeChange,
   type SizingOptions,
@@ -60,10 +61,11 @@ export function smallestPassingSize(
   doc: ProjectDocument,
   cableId: Id,
   budgetPct: number | undefined,
+  ceilingMm2 = Number.POSITIVE_INFINITY,
 ): { sizeMm2: number; doc: ProjectDocument } | null {
   const cable = doc.cables.find((c) => c.id === cableId);
   if (!cable) return null;
-  for (const s of candidateSizes(cable)) {
+  for (const s of candidateSizes(cable, ceilingMm2)) {
     const trial = withSizes(doc, new Map([[cableId, s]]));
     if (cablePasses(cableId, cable.to, solve(trial), budgetPct)) return { sizeMm2: s, doc: trial };
   }
@@ -80,12 +82,16 @@ export function proposeCableSize(
   cableId: Id,
   options: SizingOptions = DEFAULT_SIZING,
 ): { changes: SizeChange[]; error?: string } {
-  const budget = dropBudgets(doc, solve(doc), options).get(cableId);
-  const found = smallestPassingSize(doc, cableId, budget);
+  const results = solve(doc);
+  const budget = dropBudgets(doc, results, options).get(cableId);
+  const cable = doc.cables.find((c) => c.id === cableId);
+  const ceiling = cable ? sizeCeilings(results, options)(cable) : Number.POSITIVE_INFINITY;
+  const found = smallestPassingSize(doc, cableId, budget, ceiling);
   if (!found) {
+    const within = Number.isFinite(ceiling) ? ` up to the ${ceiling} mm² set for final circuits` : '';
     return {
       changes: [],
-      error: `cable ${cableId}: no size in the capacity tables passes every check; change the device, installation method or route`,
+      error: `cable ${cableId}: no size in the capacity tables${within} passes every check; change the device, installation method or route`,
     };
   }
   const reason = `smallest size passing Iz, I2, cpc, Zs and ${budget === undefined ? 'no drop budget' : `a drop budget of ${budget.toFixed(2)} %`}`;

@@ -15,6 +15,7 @@ import {
   DEFAULT_SIZING,
   diffSizes,
   failingBreaking,
+  sizeCeilings,
   failingSizingChecks,
   resized,
   totalVolume,
@@ -51,26 +52,31 @@ export interface TreeSizingResult {
    * drawn: sizing does not claim breaking capacity (a larger cable raises the fault level).
    */
   newBreakingFailures: Id[];
+  /** The largest size final circuits were allowed (SizingOptions.maxFinalMm2), null for none. */
+  maxFinalMm2: number | null;
 }
 
+/** The largest size each cable may be given (sizeCeilings). */
+type Ceiling = (cable: Cable) => number;
+
 /** Smallest size that carries the device setting (In <= Iz, I2 <= 1.45 Iz): a local lower bound. */
-function capacityFloor(cable: Cable, ibA: number): number | undefined {
+function capacityFloor(cable: Cable, ibA: number, ceiling: Ceiling): number | undefined {
   const device = cable.device;
   const inA = device ? settingA(device) : ibA;
   const i2 = device ? conventionalOperatingMultiple(device.type, inA) * inA : 0;
-  for (const s of candidateSizes(cable)) {
+  for (const s of candidateSizes(cable, ceiling(cable))) {
     const cap = cableCapacity(resized(cable, s), BUILT_IN_CAPACITY_TABLES);
     if (!('error' in cap) && inA <= cap.izA && i2 <= 1.45 * cap.izA) return s;
   }
   return undefined;
 }
 
-function stepUp(cable: Cable): number | undefined {
-  return candidateSizes(cable).find((s) => s > cable.sizeMm2);
+function stepUp(cable: Cable, ceiling: Ceiling): number | undefined {
+  return candidateSizes(cable, ceiling(cable)).find((s) => s > cable.sizeMm2);
 }
 
-function stepDown(cable: Cable): number | undefined {
-  const sizes = candidateSizes(cable).filter((s) => s < cable.sizeMm2);
+function stepDown(cable: Cable, ceiling: Ceiling): number | undefined {
+  const sizes = candidateSizes(cable, ceiling(cable)).filter((s) => s < cable.sizeMm2);
   return sizes[sizes.length - 1];
 }
 
@@ -83,6 +89,7 @@ function creditMotorDip(
   node: Results['nodes'][Id],
   byId: ReadonlyMap<Id, Cable>,
   credit: (c: Cable, amount: number) => void,
+  ceiling: Ceiling,
 ): void {
   const dip = node.protection?.checks.find((c) => c.key === 'motorDip');
   if (!dip || dip.value === null || dip.limit === null || !(dip.value > 0)) return;
@@ -97,7 +104,7 @@ function creditMotorDip(
   if (!(pathOhm > 0)) return;
   for (const id of node.path) {
     const c = byId.get(id);
-    const up = c && stepUp(c);
+    const up = c && stepUp(c, ceiling);
     if (!c || up === undefined) continue;
     const saved = (ohms(c, c.sizeMm2) - ohms(c, up)) / pathOhm;
     credit(c, Math.min(1, saved / Math.max(needed, 1e-9)));
@@ -109,6 +116,7 @@ function bestUpgrade(
   doc: ProjectDocument,
   results: Results,
   failing: { id: Id; key: string }[],
+  ceiling: Ceiling,
 ): Cable | undefined {
   const byId = new Map(doc.cables.map((c) => [c.id, c]));
   const score = new Map<Id, number>();
@@ -122,7 +130,7 @@ function bestUpgrade(
     const node = results.nodes[f.id];
     if (!node) continue;
     if (f.key === 'motorDip') {
-      creditMotorDip(node, byId, credit);
+      creditMotorDip(node, byId, credit, ceiling);
       continue;
     }
     const zsCheck = node.protection?.checks.find((c) => c.key === 'zs');
@@ -135,7 +143,7 @@ function bestUpgrade(
           : 0;
     for (const id of node.path) {
       const c = byId.get(id);
-      const up = c && stepUp(c);
+      const up = c && stepUp(c, ceiling);
       const cr = results.cables[id];
       if (!c || up === undefined || !cr) continue;
       const r0 = resistance20OhmPerM(c.material, c.sizeMm2) ?? 0;
@@ -149,7 +157,7 @@ function bestUpgrade(
   let bestRatio = 0;
   for (const [id, s] of score) {
     const c = byId.get(id)!;
-    const up = stepUp(c);
+    const up = stepUp(c, ceiling);
     if (up === undefined) continue;
     const ratio = s / Math.max(1e-9, volumeMm2M(c, up) - volumeMm2M(c));
     if (ratio > bestRatio) [best, bestRatio] = [c, ratio];
@@ -158,7 +166,7 @@ function bestUpgrade(
 }
 
 /** Tries each cable one size down, largest volume first, keeping any step that still passes. */
-function* trim(doc: ProjectDocument): Generator<SizingProgress, ProjectDocument> {
+function* trim(doc: ProjectDocument, ceiling: Ceiling): Generator<SizingProgress, ProjectDocument> {
   let current = doc;
   const order = [...doc.cables].sort((a, b) => volumeMm2M(b) - volumeMm2M(a)).map((c) => c.id);
   let changed = true;
@@ -166,7 +174,7 @@ function* trim(doc: ProjectDocument): Generator<SizingProgress, ProjectDocument>
     changed = false;
     for (let i = 0; i < order.length; i++) {
       const c = current.cables.find((x) => x.id === order[i])!;
-      const down = stepDown(c);
+      const down = stepDown(c, ceiling);
       if (down !== undefined) {
         const trial = withSizes(current, new Map([[c.id, down]]));
         if (failingSizingChecks(solve(trial)).length === 0) {
@@ -180,15 +188,20 @@ function* trim(doc: ProjectDocument): Generator<SizingProgress, ProjectDocument>
   return current;
 }
 
-function* perCable(doc: ProjectDocument, options: SizingOptions): Generator<SizingProgress, ProjectDocument> {
-  const first = solve(doc);
+function* perCable(
+  doc: ProjectDocument,
+  first: Results,
+  options: SizingOptions,
+  ceiling: Ceiling,
+): Generator<SizingProgress, ProjectDocument> {
   const budgets = dropBudgets(doc, first, options);
   const order = [...doc.cables].sort(
     (a, b) => (first.nodes[a.to]?.path.length ?? 0) - (first.nodes[b.to]?.path.length ?? 0),
   );
   let current = doc;
   for (let i = 0; i < order.length; i++) {
-    const found = smallestPassingSize(current, order[i]!.id, budgets.get(order[i]!.id));
+    const c = order[i]!;
+    const found = smallestPassingSize(current, c.id, budgets.get(c.id), ceiling(c));
     if (found) current = found.doc;
     yield { phase: 'perCable', done: i + 1, total: order.length };
   }
@@ -204,14 +217,16 @@ export function* sizeTreeSteps(
   doc: ProjectDocument,
   options: SizingOptions = DEFAULT_SIZING,
 ): Generator<SizingProgress, TreeSizingResult> {
-  const baseline = yield* perCable(doc, options);
+  const base = solve(doc);
+  // Final or distribution follows the drawing, not the sizes, so the solve as drawn classes them.
+  const ceiling = sizeCeilings(base, options);
+  const baseline = yield* perCable(doc, base, options, ceiling);
   const baselineFails = failingSizingChecks(solve(baseline));
 
   // Tree search: every cable at its capacity floor, then upsize where it helps most per volume.
-  const base = solve(doc);
   const floors = new Map<Id, number>();
   for (const c of doc.cables) {
-    const f = capacityFloor(c, base.cables[c.id]?.ibA ?? 0);
+    const f = capacityFloor(c, base.cables[c.id]?.ibA ?? 0, ceiling);
     if (f !== undefined) floors.set(c.id, f);
   }
   let tree = withSizes(doc, floors);
@@ -220,19 +235,19 @@ export function* sizeTreeSteps(
     const results = solve(tree);
     const failing = failingSizingChecks(results);
     if (failing.length === 0) break;
-    const up = bestUpgrade(tree, results, failing);
+    const up = bestUpgrade(tree, results, failing, ceiling);
     if (!up) break;
-    tree = withSizes(tree, new Map([[up.id, stepUp(up)!]]));
+    tree = withSizes(tree, new Map([[up.id, stepUp(up, ceiling)!]]));
     yield { phase: 'tree', done: step + 1, total: limit };
   }
-  tree = yield* trim(tree);
+  tree = yield* trim(tree, ceiling);
   const treeFails = failingSizingChecks(solve(tree));
 
   const vBaseline = totalVolume(baseline);
   let chosen = tree;
   let method: TreeSizingResult['method'] = 'tree';
   if (baselineFails.length === 0 && (treeFails.length > 0 || totalVolume(tree) > vBaseline)) {
-    chosen = yield* trim(baseline);
+    chosen = yield* trim(baseline, ceiling);
     method = 'perCable';
   }
   const chosenResults = solve(chosen);
@@ -254,6 +269,7 @@ export function* sizeTreeSteps(
     savedPct: vBaseline > 0 ? (100 * (vBaseline - vChosen)) / vBaseline : 0,
     method,
     newBreakingFailures,
+    maxFinalMm2: options.maxFinalMm2,
   };
 }
 

@@ -24,12 +24,30 @@ export const SIZING_CHECKS = ['inIz', 'i2', 'cpc', 'zs', 'drop', 'motorDip'] as 
 export interface SizingOptions {
   /** Share of each load's drop limit given to distribution circuits on its path (fixed split). */
   distributionShare: number;
+  /**
+   * Largest line conductor sizing may give a final circuit, mm² (what the device and the equipment
+   * terminals take); null for no limit. Distribution circuits are not limited.
+   */
+  maxFinalMm2: number | null;
 }
 
-export const DEFAULT_SIZING: SizingOptions = { distributionShare: 0.4 };
+export const DEFAULT_SIZING: SizingOptions = { distributionShare: 0.4, maxFinalMm2: null };
 
-/** Sizes a cable may take: the capacity tables cover them and IEC 60228 lists their resistance. */
-export function candidateSizes(cable: Cable): number[] {
+/**
+ * The largest size sizing may give each cable: `maxFinalMm2` for a final circuit (as the solve in
+ * `results` classes it), no limit otherwise.
+ */
+export function sizeCeilings(results: Results, options: SizingOptions): (cable: Cable) => number {
+  const cap = options.maxFinalMm2;
+  return (c) =>
+    cap !== null && results.cables[c.id]?.protection?.circuit === 'final' ? cap : Number.POSITIVE_INFINITY;
+}
+
+/**
+ * Sizes a cable may take: the capacity tables cover them, IEC 60228 lists their resistance, and
+ * they are no larger than `ceilingMm2`.
+ */
+export function candidateSizes(cable: Cable, ceilingMm2 = Number.POSITIVE_INFINITY): number[] {
   const loaded = cable.phases === 3 ? 3 : 2;
   const method = cable.installation?.method ?? 'clippedDirect';
   return sizesWithCapacity(
@@ -41,7 +59,7 @@ export function candidateSizes(cable: Cable): number[] {
       loaded,
     },
     BUILT_IN_CAPACITY_TABLES,
-  ).filter((s) => resistance20OhmPerM(cable.material, s) !== undefined);
+  ).filter((s) => s <= ceilingMm2 && resistance20OhmPerM(cable.material, s) !== undefined);
 }
 
 /** Each resized cable remembers the cable as drawn, so repeated resizing never compounds. */

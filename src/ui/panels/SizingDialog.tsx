@@ -3,6 +3,10 @@ import { useEditor } from '../../store/editorStore.ts';
 import { Dialog } from './Dialog.tsx';
 import { acceptedChanges, type ProposalKind, type ProposalSet } from './proposals.ts';
 import { runProposals, type Progress } from './runProposals.ts';
+import { DEFAULT_SIZING } from '../../solver/sizing/sizingCore.ts';
+
+/** Terminal limits offered for final circuits, mm². */
+const FINAL_SIZE_LIMITS = [4, 6, 10, 16, 25, 35] as const;
 
 const KINDS: { id: ProposalKind; label: string; blurb: string }[] = [
   {
@@ -38,11 +42,12 @@ function ProposalReview() {
   const [progress, setProgress] = useState<Progress | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [ticked, setTicked] = useState<Set<string>>(new Set());
+  const [maxFinalMm2, setMaxFinalMm2] = useState<number | null>(null);
 
   useEffect(() => {
     setSet(null);
     setError(null);
-    const job = runProposals(kind, doc, results, setProgress);
+    const job = runProposals(kind, doc, results, setProgress, { ...DEFAULT_SIZING, maxFinalMm2 });
     job.done.then(
       (s) => {
         setSet(s);
@@ -57,7 +62,7 @@ function ProposalReview() {
     return job.cancel;
     // The proposals are for the document as it was when the dialog opened; a change while it is
     // open (undo from the keyboard is blocked by the dialog) would start a new run.
-  }, [kind, doc, results]);
+  }, [kind, doc, results, maxFinalMm2]);
 
   const changes = useMemo(() => (set ? acceptedChanges(set.rows, ticked) : []), [set, ticked]);
   const apply = () => {
@@ -115,6 +120,24 @@ function ProposalReview() {
         ))}
       </div>
       <p className="dl-hint">{KINDS.find((k) => k.id === kind)!.blurb}</p>
+      {kind === 'sizing' && (
+        <label className="dl-inline-field">
+          Largest size for final circuits{' '}
+          <select
+            data-testid="sizing-max-final"
+            value={maxFinalMm2 === null ? '' : String(maxFinalMm2)}
+            onChange={(e) => setMaxFinalMm2(e.target.value === '' ? null : Number(e.target.value))}
+            title="What the protective devices and the equipment terminals of final circuits take; sub-mains are not limited"
+          >
+            <option value="">no limit</option>
+            {FINAL_SIZE_LIMITS.map((s) => (
+              <option key={s} value={s}>
+                {s} mm²
+              </option>
+            ))}
+          </select>
+        </label>
+      )}
       {progress && (
         <div data-testid="proposals-progress" aria-live="polite">
           <p>{progress.text}</p>

@@ -6,6 +6,7 @@ import type { ProjectDocument } from '../../model/types.ts';
 import type { Results } from '../../solver/results.ts';
 import { phaseBalanceProposals, type ProposalKind, type ProposalSet } from './proposals.ts';
 import { sizingProposals } from './sizingProposals.ts';
+import { DEFAULT_SIZING, type SizingOptions } from '../../solver/sizing/sizingCore.ts';
 
 export interface Progress {
   text: string;
@@ -23,6 +24,7 @@ export function runProposals(
   doc: ProjectDocument,
   results: Results,
   onProgress: (p: Progress) => void,
+  sizing: SizingOptions = DEFAULT_SIZING,
 ): Job {
   let cancelled = false;
   const report = (p: Progress) => {
@@ -45,6 +47,7 @@ export function runProposals(
                 results,
                 (fraction, text) => report({ fraction, text }),
                 () => cancelled,
+                sizing,
               );
         Promise.resolve(set).then((s) => {
           if (!cancelled) resolve(s);

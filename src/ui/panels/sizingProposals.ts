@@ -10,7 +10,7 @@ import {
   type SizingProgress,
   type TreeSizingResult,
 } from '../../solver/sizing/proposeTreeSizing.ts';
-import type { SizeChange } from '../../solver/sizing/sizingCore.ts';
+import { DEFAULT_SIZING, type SizeChange, type SizingOptions } from '../../solver/sizing/sizingCore.ts';
 import { fmt } from './format.ts';
 import type { ProposalRow, ProposalSet } from './proposals.ts';
 
@@ -80,6 +80,10 @@ export function sizingSummary(r: TreeSizingResult): string[] {
         .map((f) => `${f.id} ${f.key}`)
         .join(', ')}${r.failing.length > 6 ? ', …' : ''}); sizes alone cannot fix them.`,
     );
+  if (r.maxFinalMm2 !== null)
+    lines.push(
+      `Final circuits were kept at or below ${r.maxFinalMm2} mm²; where that is not enough, a larger sub-main carries the drop instead, or the check stays failing.`,
+    );
   if (r.newBreakingFailures.length > 0)
     lines.push(
       `Larger cables raise the fault level: the device on ${r.newBreakingFailures.join(', ')} would then fall short of its breaking capacity; choose a device with a higher breaking capacity there.`,
@@ -93,8 +97,9 @@ export function sizingProposals(
   _results: Results,
   progress: (fraction: number, text: string) => void,
   cancelled: () => boolean,
+  options: SizingOptions = DEFAULT_SIZING,
 ): Promise<ProposalSet> {
-  const steps = sizeTreeSteps(doc);
+  const steps = sizeTreeSteps(doc, options);
   return new Promise((resolve, reject) => {
     const slice = () => {
       if (cancelled()) return;

@@ -5,6 +5,7 @@ import { SizingDialog } from '../../../../src/ui/panels/SizingDialog.tsx';
 import { editorStore } from '../../../../src/store/editorStore.ts';
 import { proposePhaseBalance } from '../../../../src/solver/balancePhases.ts';
 import { proposeTreeSizing } from '../../../../src/solver/sizing/proposeTreeSizing.ts';
+import { DEFAULT_SIZING } from '../../../../src/solver/sizing/sizingCore.ts';
 import { newCable, newLoad } from '../../../../src/model/defaults.ts';
 import type { Load } from '../../../../src/model/types.ts';
 import { loadIntoStore, smallNetwork } from './harness.ts';
@@ -84,6 +85,28 @@ describe('proposal review', () => {
       expect(ch.field === 'sizeMm2' ? cable.sizeMm2 : cable.cpc.sizeMm2).toBe(ch.to);
     }
     expect(editorStore.getState().past.length).toBe(1);
+  });
+
+  test('a limit on final-circuit sizes reruns the sizing with it and says so', async () => {
+    const doc = smallNetwork();
+    doc.cables[2]!.lengthM = 90;
+    loadIntoStore(doc);
+    const expected = proposeTreeSizing(doc, { ...DEFAULT_SIZING, maxFinalMm2: 4 });
+    act(() => editorStore.getState().openDialog('sizing'));
+    render(<SizingDialog />);
+    await screen.findByTestId('proposals-table', {}, { timeout: 10000 });
+    fireEvent.change(screen.getByTestId('sizing-max-final'), { target: { value: '4' } });
+    await waitFor(
+      () =>
+        expect(screen.getByTestId('sizing-dialog').textContent).toContain(
+          'Final circuits were kept at or below 4 mm²',
+        ),
+      { timeout: 10000 },
+    );
+    const rows = [...screen.getByTestId('proposals-table').querySelectorAll('tbody tr')];
+    expect(rows.map((r) => r.getAttribute('data-proposal'))).toEqual([
+      ...new Set(expected.changes.map((c) => `${c.cableId}.size`)),
+    ]);
   });
 
   test('nothing ticked, nothing applied', async () => {
