@@ -30,7 +30,7 @@ export class IdList implements IdsByPosition {
   }
 
   at(i: number): string {
-    // Out of range (or a fraction) reads as no id, like a hole.
+    // Out of range reads as no id, as a hole of a plain array would.
     return (i >= 0 && i < this.length && this.#blocks[i >> SHIFT]![i & MASK]) || '';
   }
 
