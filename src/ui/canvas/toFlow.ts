@@ -107,6 +107,13 @@ function sameEdgeData(a: CableEdgeData, b: CableEdgeData): boolean {
 export function createFlowBuilder() {
   let nodeCache = new Map<Id, ElementFlowNode>();
   let edgeCache = new Map<Id, CableFlowEdge>();
+  // Nodes and edges both name the load that sets a status: worked out once per document and results.
+  let worstMemo: { doc: ProjectDocument; results: Results; map: Map<Id, WorstFed> } | undefined;
+  const worstFor = (doc: ProjectDocument, results: Results): Map<Id, WorstFed> => {
+    if (worstMemo?.doc !== doc || worstMemo.results !== results)
+      worstMemo = { doc, results, map: worstLoadsFed(doc, results) };
+    return worstMemo.map;
+  };
 
   function problems(results: Results): Map<Id, string> {
     const out = new Map<Id, string>();
@@ -149,7 +156,7 @@ export function createFlowBuilder() {
     const issues = problems(results);
     const closeShare = doc.settings.closeThreshold;
     const devices = labelMode === 'fault' ? deviceStatusAtNodes(input) : null;
-    const worst = DROP_STATUS_MODES.includes(labelMode) ? worstLoadsFed(doc, results) : null;
+    const worst = DROP_STATUS_MODES.includes(labelMode) ? worstFor(doc, results) : null;
     const next = new Map<Id, ElementFlowNode>();
     const list = doc.nodes.map((element) => {
       const r = results.nodes[element.id];
@@ -203,7 +210,7 @@ export function createFlowBuilder() {
     });
     const byId = new Map(doc.nodes.map((n) => [n.id, n]));
     // A sub-main shown close or over names the load that makes it so, as its board's badge does.
-    const worst = labelMode === 'drop' ? worstLoadsFed(doc, results) : null;
+    const worst = labelMode === 'drop' ? worstFor(doc, results) : null;
     const texts = drawable.map((cable) => {
       const r = results.cables[cable.id];
       const far = results.nodes[cable.to];

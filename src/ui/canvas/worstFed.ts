@@ -18,14 +18,16 @@ export interface WorstFed {
  */
 export function worstLoadsFed(doc: ProjectDocument, results: Results): Map<Id, WorstFed> {
   const out = new Map<Id, WorstFed>();
+  // Built at the first close or over load: a redraw of a design within its limits skips them.
   let farEnd: Map<Id, Id> | undefined;
+  let origin: Id | undefined;
   for (const [loadId, load] of Object.entries(results.loads)) {
     if (load.status !== 'close' && load.status !== 'over') continue;
-    farEnd ??= new Map(doc.cables.map((c) => [c.id, c.to]));
-    const upstream = [
-      doc.nodes.find((n) => n.kind === 'supply')?.id,
-      ...load.path.map((c) => farEnd!.get(c)),
-    ];
+    if (!farEnd) {
+      farEnd = new Map(doc.cables.map((c) => [c.id, c.to]));
+      origin = doc.nodes.find((n) => n.kind === 'supply')?.id;
+    }
+    const upstream = [origin, ...load.path.map((c) => farEnd!.get(c))];
     for (const id of upstream) {
       if (id === undefined || id === loadId) continue;
       const held = out.get(id);
