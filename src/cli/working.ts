@@ -26,16 +26,18 @@ export function workingRecords(results: Results, id: string): { title: string; r
   if (own(results.cables, id)) {
     const c = results.cables[id]!;
     groups.push({ title: 'Drop', records: c.working });
-    if (c.protection)
+    // The same sections, in the same order, as the editor's details panel.
+    if (c.protection) {
+      groups.push({ title: 'Capacity and R1 + R2', records: c.protection.working });
       groups.push({ title: 'Protection checks', records: c.protection.checks.map((k) => k.working) });
+    }
   } else if (own(results.nodes, id)) {
     const n = results.nodes[id]!;
     groups.push({ title: 'Drop', records: n.working });
-    if (n.protection)
-      groups.push({
-        title: 'Loop impedance and fault level',
-        records: n.protection.checks.map((k) => k.working),
-      });
+    if (n.protection) {
+      groups.push({ title: 'Loop impedance and fault level', records: n.protection.working });
+      groups.push({ title: 'Protection checks', records: n.protection.checks.map((k) => k.working) });
+    }
   } else {
     return null;
   }

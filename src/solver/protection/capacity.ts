@@ -132,9 +132,7 @@ export function cableCapacity(
           'Cg',
           group.factor,
           '',
-          buried
-            ? `${group.source}, ${group.usedAt} circuits`
-            : `${group.source}, ${inst.groupArrangement}, ${group.usedAt} circuits`,
+          `${group.source}${buried ? '' : `, ${inst.groupArrangement}`}, ${group.usedAt} circuit${group.usedAt === 1 ? '' : 's'}`,
         ],
         ['Ci', ci, '', 'installation.insulationFactor'],
         ...(n > 1 ? [['n', n, 'cables', 'cable.parallel'] as const] : []),

@@ -99,6 +99,17 @@ describe('dropline check', () => {
     expect(r.out).toMatch(/result: /);
   });
 
+  test('--working shows what the details panel shows: capacity and R1 + R2, loop impedance and fault level', () => {
+    const cable = run('check', demo, '--working', 'C27');
+    expect(cable.out).toMatch(/Capacity and R1 \+ R2:\n {2}Current-carrying capacity Iz {2}\[iz\]/);
+    expect(cable.out).toMatch(/\[r1r2\]/);
+    // The check that points to the Iz working now has it printed above it.
+    expect(cable.out.indexOf('[iz]')).toBeLessThan(cable.out.indexOf('see the Iz working'));
+    const board = run('check', demo, '--working', 'DB4');
+    expect(board.out).toMatch(/Loop impedance and fault level:\n/);
+    expect(board.out).toMatch(/Protection checks:\n/);
+  });
+
   test('--working with an unknown id: exit 2 with a suggestion', () => {
     const r = run('check', fixture('pass'), '--working', 'c1x');
     expect(r.code).toBe(2);
