@@ -4,15 +4,15 @@
  */
 import type { ProjectDocument } from '../model/types.ts';
 import { CAUTIONS } from '../model/cautions.ts';
-import type { Results, Status } from '../solver/results.ts';
+import { STATUS_SHOWN, type Results, type Status } from '../solver/results.ts';
 import { fixed, table, wrap } from './format.ts';
 import type { CheckSummary } from './summary.ts';
 
-/** The same words and glyphs the editor shows (src/ui/status.ts); a test keeps them equal. */
+/** The same words (STATUS_SHOWN) and glyphs the editor shows (src/ui/status.ts); a test keeps the glyphs equal. */
 export const STATUS_TEXT: Readonly<Record<Status | 'none', string>> = {
-  within: '✓ clear',
-  close: '▲ tight',
-  over: '✕ over',
+  within: `✓ ${STATUS_SHOWN.within}`,
+  close: `▲ ${STATUS_SHOWN.close}`,
+  over: `✕ ${STATUS_SHOWN.over}`,
   none: '– no result',
 };
 
@@ -169,7 +169,7 @@ function findings(results: Results): string {
 
 function verdict(s: CheckSummary): string {
   const parts = [
-    `${s.loads} loads: ${s.within} clear, ${s.close} tight, ${s.over} over${s.unsolved ? `, ${s.unsolved} with no result` : ''}`,
+    `${s.loads} loads: ${s.within} ${STATUS_SHOWN.within}, ${s.close} ${STATUS_SHOWN.close}, ${s.over} ${STATUS_SHOWN.over}${s.unsolved ? `, ${s.unsolved} with no result` : ''}`,
     `findings: ${s.errorFindings} errors, ${s.warningFindings} warnings, ${s.infoFindings} notes`,
   ];
   if (s.failedChecks || s.unassessedChecks) {
