@@ -163,6 +163,7 @@ export interface DropState {
   rankReady: boolean;
   /** Scratch for the topology: compressed child lists. */
   childStart: Int32Array;
+  /** The child lists' cables; before the adjacency is built, each cable's id claim (its holder). */
   childCables: Int32Array;
 }
 

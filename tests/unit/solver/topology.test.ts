@@ -85,6 +85,24 @@ describe('topology findings', () => {
   it('duplicate ids are refused', () => {
     expect(codes(base().load('L1').doc())).toContain('duplicateId');
   });
+
+  it('a repeated cable id: the first cable keeps it and is solved; the findings come in list order', () => {
+    // The cable ids are claimed in a pass before the cables are read (topology.ts); this holds the
+    // findings of that pass and of the main one in the order of the cable list.
+    const doc = base().load('L2').load('L3').cable('C2', 'DB', 'L2').cable('C4', 'DB', 'NOWHERE').doc();
+    doc.cables.splice(2, 0, { ...doc.cables[1]!, id: '' });
+    const r = solveDrop(doc);
+    expect(r.findings.map((f) => [f.code, f.elementId])).toEqual([
+      ['malformedElement', undefined],
+      ['duplicateId', 'C2'],
+      ['unknownEnd', 'C4'],
+      ['island', 'L2'],
+      ['island', 'L3'],
+    ]);
+    expect(r.cables.C2?.solved).toBe(true);
+    expect(r.loads.L1?.path).toEqual(['C1', 'C2']);
+    expect(r.loads.L2?.solved).toBe(false);
+  });
 });
 
 describe('phase findings', () => {
