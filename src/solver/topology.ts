@@ -127,33 +127,25 @@ export function buildTopology(s: DropState): void {
   let lastTo = -1;
   let lastFrom = -1;
   for (let j = 0; j < m; j++) {
-    const c: unknown = cables[j];
-    const id = typeof c === 'object' && c !== null && !Array.isArray(c) ? (c as Loose).id : undefined;
-    if (typeof id !== 'string' || id === '') {
-      findings.push({
-        code: 'malformedElement',
-        severity: 'error',
-        message: `cable number ${j + 1} in the list has no id (got ${shown(id)}); give it a unique text id.`,
-      });
-      continue;
-    }
+    // The claim says whether the id is well formed and new, so the id itself is not read again
+    // here (a test of a string's type or length reads the string).
     if (holder[j] !== j) {
-      findings.push({
-        code: 'duplicateId',
-        severity: 'error',
-        elementId: id,
-        message: `id ${id} is used by more than one cable; the later one is left out until it gets its own id.`,
-      });
+      findings.push(cableIdProblem(cables[j], j, holder[j] as number));
       continue;
     }
-    const cable = c as Loose;
+    const cable = cables[j] as unknown as Loose;
+    const id = cable.id as string;
     const fromId = cable.from;
     const toId = cable.to;
     // Cables mostly follow the node list: try the node after the last one fed, and the last
     // sending end (siblings) or the last node fed (a chain), before the index. A node holds its
-    // id in nodeIds only when it is the id's first holder, which is what the index answers.
+    // id in nodeIds only when it is the id's first holder, which is what the index answers; a
+    // node that holds none is KIND_INVALID, so '' never matches.
     const nextTo = lastTo + 1;
-    const to = nextTo < n && nodeIds.at(nextTo) === toId && toId !== '' ? nextTo : nodeIndex.get(toId);
+    const to =
+      nextTo < n && nodeKind[nextTo] !== KIND_INVALID && nodeIds.at(nextTo) === toId
+        ? nextTo
+        : nodeIndex.get(toId);
     const from =
       lastFrom >= 0 && nodeIds.at(lastFrom) === fromId
         ? lastFrom
@@ -227,6 +219,23 @@ export function buildTopology(s: DropState): void {
     order.fill(0, len);
     classifyUnreached(s, findings);
   }
+}
+
+/** The finding for cable `j` whose id is missing (`holder` -1) or already held by an earlier cable. */
+function cableIdProblem(c: unknown, j: number, holder: number): DropFinding {
+  const id = isObject(c) ? c.id : undefined;
+  if (holder < 0 || typeof id !== 'string')
+    return {
+      code: 'malformedElement',
+      severity: 'error',
+      message: `cable number ${j + 1} in the list has no id (got ${shown(id)}); give it a unique text id.`,
+    };
+  return {
+    code: 'duplicateId',
+    severity: 'error',
+    elementId: id,
+    message: `id ${id} is used by more than one cable; the later one is left out until it gets its own id.`,
+  };
 }
 
 /** Why a cable with a valid, new id cannot join the tree, or undefined. */
