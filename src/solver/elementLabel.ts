@@ -5,9 +5,15 @@
  */
 import type { Cable } from '../model/types.ts';
 
-/** @example elementLabel('load', 'L4', 'Kiln heater') // 'load L4 (Kiln heater)' */
+/**
+ * A name that has brackets of its own is quoted instead, so it does not read as brackets within
+ * brackets.
+ * @example elementLabel('load', 'L4', 'Kiln heater') // 'load L4 (Kiln heater)'
+ * @example elementLabel('load', 'L9', 'Yard lights (rear)') // 'load L9 “Yard lights (rear)”'
+ */
 export function elementLabel(word: string, id: string, name: unknown): string {
-  return typeof name === 'string' && name !== '' && name !== id ? `${word} ${id} (${name})` : `${word} ${id}`;
+  if (typeof name !== 'string' || name === '' || name === id) return `${word} ${id}`;
+  return /[()]/.test(name) ? `${word} ${id} “${name}”` : `${word} ${id} (${name})`;
 }
 
 /** @example cableLabel({ id: 'C2', name: '' }) // 'cable C2' */

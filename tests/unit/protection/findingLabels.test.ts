@@ -37,6 +37,8 @@ describe('protection finding labels', () => {
     expect(elementLabel('board', 'DB2', 'Offices')).toBe('board DB2 (Offices)');
     expect(elementLabel('board', 'DB2', '')).toBe('board DB2');
     expect(elementLabel('board', 'DB2', 'DB2')).toBe('board DB2');
+    // Brackets within brackets read badly: such a name is quoted.
+    expect(elementLabel('load', 'L29', 'Yard floodlights (rear)')).toBe('load L29 “Yard floodlights (rear)”');
     expect(elementLabel('board', 'DB2', undefined)).toBe('board DB2');
   });
 });
