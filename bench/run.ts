@@ -48,7 +48,7 @@ interface Case {
   roundTrav: number[];
 }
 
-const ROUNDS = 25;
+const ROUNDS = 31;
 let sink = 0;
 
 /**
@@ -60,7 +60,7 @@ let sink = 0;
 function measureAll(): { rows: Row[]; pairedScaling: number; traversalScaling: number } {
   const cases: Case[] = SIZES.map((elements) => ({
     doc: randomNetwork(elements, 20261201),
-    repeats: elements >= 100000 ? 3 : elements >= 10000 ? 5 : 15,
+    repeats: elements >= 100000 ? 5 : elements >= 10000 ? 7 : 15,
     solveT: [],
     dropT: [],
     travT: [],
