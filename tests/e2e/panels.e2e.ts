@@ -86,6 +86,29 @@ test('a schedule row selects the element; the details show the engine’s figure
   expect(s.errors).toEqual([]);
 });
 
+test('the cable schedule downloads as a CSV that holds every cable with the engine’s figures', async () => {
+  const doc = demo();
+  const results = solve(doc);
+  const ui = new Panels(s.page);
+  await ui.start();
+  await ui.openSchedules();
+  // The filter hides rows on screen; the file keeps every row.
+  await s.page.getByTestId('filter-within').uncheck();
+  const [file] = await Promise.all([
+    s.page.waitForEvent('download'),
+    s.page.getByTestId('schedule-csv').click(),
+  ]);
+  expect(file.suggestedFilename()).toBe(`${doc.details.reference}-cable-schedule.csv`);
+  const text = readFileSync((await file.path())!, 'utf8');
+  expect(text).toContain('Caution,Dropline is a design aid.');
+  const lines = text.split('\r\n');
+  const head = lines.findIndex((l) => l.startsWith('Id,'));
+  expect(lines.slice(head + 1, -1).map((l) => l.split(',')[0])).toEqual(doc.cables.map((c) => c.id));
+  const worst = doc.cables.find((c) => results.cables[c.id]?.status === 'over')!;
+  expect(lines.find((l) => l.startsWith(`${worst.id},`))?.split(',')[1]).toBe('over');
+  expect(s.errors).toEqual([]);
+});
+
 test('a bad length is refused in place; a good one changes the cumulative drop to the engine’s value', async () => {
   const doc = demo();
   const results = solve(doc);

@@ -110,8 +110,9 @@ export async function saveProject(asNew = false): Promise<void> {
   s.notify(`Downloaded ${suggestedName()}.`);
 }
 
-function download(text: string, name: string): void {
-  const url = URL.createObjectURL(new Blob([text], { type: 'application/json' }));
+/** Hands `text` to the browser as a downloaded file named `name`. */
+export function download(text: string, name: string, type = 'application/json'): void {
+  const url = URL.createObjectURL(new Blob([text], { type }));
   const a = document.createElement('a');
   a.href = url;
   a.download = name;

@@ -4,6 +4,8 @@ import { boardSchedule, cableSchedule, loadSchedule } from './scheduleRows.ts';
 import { ALL_STATUSES, type StatusFilter } from './scheduleSort.ts';
 import { ScheduleTable } from './ScheduleTable.tsx';
 import { statusLook as lookOf } from '../status.ts';
+import { scheduleCsv, scheduleFileName } from './scheduleCsv.ts';
+import { download } from '../files/fileActions.ts';
 import './panels.css';
 import './tables.css';
 
@@ -23,6 +25,7 @@ export function SchedulesDrawer() {
   const selection = useEditor((s) => s.selection);
   const reveal = useEditor((s) => s.reveal);
   const openDrawer = useEditor((s) => s.openDrawer);
+  const notify = useEditor((s) => s.notify);
   const [sheet, setSheet] = useState<Sheet>('cables');
   const [filter, setFilter] = useState<StatusFilter>(ALL_STATUSES);
   const schedule = useMemo(() => {
@@ -69,6 +72,20 @@ export function SchedulesDrawer() {
             );
           })}
         </fieldset>
+        <button
+          type="button"
+          data-testid="schedule-csv"
+          title="Download this schedule as a CSV file: every row, whatever the filter, with the project details, the data used and the cautions at the top."
+          onClick={() => {
+            const title = SHEETS.find((x) => x.id === sheet)?.label ?? 'Schedule';
+            const name = scheduleFileName(doc, title);
+            const status = sheet === 'loads' ? 'Status' : 'Status (worst load fed)';
+            download(scheduleCsv(title, schedule, doc, results, status), name, 'text/csv;charset=utf-8');
+            notify(`Downloaded ${name}.`);
+          }}
+        >
+          Download CSV
+        </button>
         <button type="button" onClick={() => openDrawer(null)} aria-label="Close the schedules">
           Close
         </button>
