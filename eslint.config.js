@@ -20,6 +20,16 @@ const engineBans = {
   ],
 };
 
+// Exports sit above the engine and below the editor and the CLI, which both use them.
+const exportBans = {
+  patterns: [
+    ...engineBans.patterns
+      .slice(0, 3)
+      .map((p) => ({ ...p, message: p.message.replace('The engine', 'Export code') })),
+    { group: ['**/store/**', '**/ui/**', '**/cli/**'], message: 'Export code depends on nothing above it.' },
+  ],
+};
+
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'coverage', 'test-artifacts', 'bench-results'] },
   js.configs.recommended,
@@ -41,6 +51,17 @@ export default tseslint.config(
       '@typescript-eslint/no-restricted-imports': [
         'error',
         { ...engineBans, patterns: engineBans.patterns.map((p) => ({ ...p, allowTypeImports: false })) },
+      ],
+    },
+  },
+  {
+    // Exports (schedules, CSV) serve the editor and the CLI alike: no UI, store or CLI code.
+    files: ['src/export/**'],
+    rules: {
+      'no-restricted-imports': ['error', exportBans],
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        { ...exportBans, patterns: exportBans.patterns.map((p) => ({ ...p, allowTypeImports: false })) },
       ],
     },
   },

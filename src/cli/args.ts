@@ -1,11 +1,22 @@
 /** Command-line arguments of `dropline`. */
 
+import type { ScheduleSheet } from '../export/schedules.ts';
+
+const SHEET_NAMES: readonly ScheduleSheet[] = ['cables', 'loads', 'boards'];
+
 export type CliArgs =
   | { command: 'help' }
-  | { command: 'check'; file: string; json: boolean; workingId: string | null; dataFile: string | null }
+  | {
+      command: 'check';
+      file: string;
+      json: boolean;
+      workingId: string | null;
+      dataFile: string | null;
+      schedule: ScheduleSheet | null;
+    }
   | { command: 'error'; message: string };
 
-export const USAGE = `usage: dropline check FILE [--json] [--working ID] [--data TABLE]
+export const USAGE = `usage: dropline check FILE [--json | --working ID | --schedule SHEET] [--data TABLE]
 
 Checks a Dropline project file: solves it and prints, per load, its path, cumulative drop, limit
 and status; per cable, Ib, drop in V and % and the cumulative %; every finding; the cautions; the
@@ -14,6 +25,10 @@ data set and limit profile used.
 options:
   --json         print the full results as JSON for other programs (shape: docs/cli-json.md)
   --working ID   print every working record behind one element's figures (a cable, board or load id)
+  --schedule SHEET
+                 print the cable, load or board schedule (SHEET: cables, loads or boards) as CSV, as
+                 the editor's Download CSV writes it: project details, data used and cautions, then
+                 one row per element
   --data TABLE   use your own conductor data set (CSV or JSON, shape: docs/catalogue-data.md) instead
                  of the built-in one; the report and every working record name it
   --help         show this text
@@ -39,6 +54,7 @@ export function parseArgs(argv: readonly string[]): CliArgs {
   let json = false;
   let workingId: string | null = null;
   let dataFile: string | null = null;
+  let schedule: ScheduleSheet | null = null;
   for (let i = 0; i < rest.length; i++) {
     const a = rest[i]!;
     if (a === '--json') json = true;
@@ -56,11 +72,21 @@ export function parseArgs(argv: readonly string[]): CliArgs {
       dataFile = f;
       i++;
     } else if (a.startsWith('--data=')) dataFile = a.slice('--data='.length);
-    else if (a.startsWith('-')) return { command: 'error', message: `unknown option "${a}"` };
+    else if (a === '--schedule' || a.startsWith('--schedule=')) {
+      const sheet = a === '--schedule' ? rest[++i] : a.slice('--schedule='.length);
+      if (!SHEET_NAMES.includes(sheet as ScheduleSheet))
+        return {
+          command: 'error',
+          message: `--schedule needs one of ${SHEET_NAMES.join(', ')}, e.g. --schedule cables; got ${sheet === undefined ? 'nothing' : `"${sheet}"`}`,
+        };
+      schedule = sheet as ScheduleSheet;
+    } else if (a.startsWith('-')) return { command: 'error', message: `unknown option "${a}"` };
     else if (file === null) file = a;
     else return { command: 'error', message: `one file at a time; got "${file}" and "${a}"` };
   }
   if (file === null)
     return { command: 'error', message: 'name the project file to check, e.g. dropline check site.json' };
-  return { command: 'check', file, json, workingId, dataFile };
+  if ([json, workingId !== null, schedule !== null].filter(Boolean).length > 1)
+    return { command: 'error', message: 'choose one of --json, --working and --schedule' };
+  return { command: 'check', file, json, workingId, dataFile, schedule };
 }

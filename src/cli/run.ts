@@ -15,6 +15,8 @@ import { buildCliJson, cliJsonText } from './jsonOutput.ts';
 import { formatReport } from './report.ts';
 import { summarise } from './summary.ts';
 import { formatElementWorking, similarIds } from './working.ts';
+import { SCHEDULE_SHEETS } from '../export/schedules.ts';
+import { scheduleCsv } from '../export/scheduleCsv.ts';
 
 export interface CliIo {
   stdout(text: string): void;
@@ -130,6 +132,13 @@ export function runCli(
       return 2;
     }
     io.stdout(text);
+    return summary.exitCode;
+  }
+  if (args.schedule !== null) {
+    const sheet = SCHEDULE_SHEETS[args.schedule];
+    io.stdout(
+      scheduleCsv(sheet.title, sheet.build(parsed.doc, results), parsed.doc, results, sheet.statusLabel),
+    );
     return summary.exitCode;
   }
   if (args.json) io.stdout(cliJsonText(buildCliJson(parsed.doc, results, args.file, summary)));

@@ -1,6 +1,6 @@
 import type { Id, ProjectDocument } from '../../model/types.ts';
 import type { Results } from '../../solver/results.ts';
-import { fmt, fmtExact, fmtPct } from './format.ts';
+import { fmt, fmtExact, fmtPct } from '../../export/format.ts';
 import { currentsText } from './NodeFigures.tsx';
 import { StatusBadge } from './StatusBadge.tsx';
 import { CableProtectionFigures } from './ProtectionFigures.tsx';

@@ -1,6 +1,6 @@
 import type { Check } from '../../solver/protection/protectionResults.ts';
 import { statusLook } from '../status.ts';
-import { fmtValue } from './format.ts';
+import { fmtValue } from '../../export/format.ts';
 import { WorkingList } from './WorkingList.tsx';
 
 const VERDICT = {

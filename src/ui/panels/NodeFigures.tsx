@@ -1,7 +1,7 @@
 import type { Id, ProjectDocument } from '../../model/types.ts';
 import type { LoadResult, NodeResult, PhaseCurrents, Results } from '../../solver/results.ts';
 import { buildProfile } from './buildProfile.ts';
-import { fmt, fmtPct } from './format.ts';
+import { fmt, fmtPct } from '../../export/format.ts';
 import { StatusBadge } from './StatusBadge.tsx';
 import { VoltageProfile } from './VoltageProfile.tsx';
 import { NodeProtectionFigures } from './ProtectionFigures.tsx';

@@ -5,7 +5,7 @@ import type {
   NodeProtection,
 } from '../../solver/protection/protectionResults.ts';
 import { ChecksList } from './ChecksList.tsx';
-import { fmt, fmtExact } from './format.ts';
+import { fmt, fmtExact } from '../../export/format.ts';
 
 const DEVICE_NAME: Record<Device['type'], string> = {
   mcb: 'Circuit-breaker',

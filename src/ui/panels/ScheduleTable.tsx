@@ -1,6 +1,6 @@
 import { useMemo, useState } from 'react';
 import type { Id } from '../../model/types.ts';
-import type { Schedule } from './scheduleRows.ts';
+import type { Schedule } from '../../export/schedules.ts';
 import { filterRows, sortRows, type SortOrder, type StatusFilter } from './scheduleSort.ts';
 import { StatusBadge } from './StatusBadge.tsx';
 import { statusLook as lookOf } from '../status.ts';

@@ -1,20 +1,18 @@
 import { useMemo, useState } from 'react';
 import { useEditor } from '../../store/editorStore.ts';
-import { boardSchedule, cableSchedule, loadSchedule } from './scheduleRows.ts';
+import { SCHEDULE_SHEETS, type ScheduleSheet as Sheet } from '../../export/schedules.ts';
 import { ALL_STATUSES, type StatusFilter } from './scheduleSort.ts';
 import { ScheduleTable } from './ScheduleTable.tsx';
 import { statusLook as lookOf } from '../status.ts';
-import { scheduleCsv, scheduleFileName } from './scheduleCsv.ts';
+import { scheduleCsv, scheduleFileName } from '../../export/scheduleCsv.ts';
 import { download } from '../files/fileActions.ts';
 import './panels.css';
 import './tables.css';
 
-type Sheet = 'cables' | 'loads' | 'boards';
-const SHEETS: { id: Sheet; label: string }[] = [
-  { id: 'cables', label: 'Cable schedule' },
-  { id: 'loads', label: 'Loads' },
-  { id: 'boards', label: 'Board schedule' },
-];
+const SHEETS = (['cables', 'loads', 'boards'] as const).map((id) => ({
+  id,
+  label: SCHEDULE_SHEETS[id].title,
+}));
 const FILTER_KEYS = ['within', 'close', 'over', 'none'] as const;
 
 /** The schedules drawer: cables, loads and boards with the solver's figures, sortable and filterable. */
@@ -28,12 +26,10 @@ export function SchedulesDrawer() {
   const notify = useEditor((s) => s.notify);
   const [sheet, setSheet] = useState<Sheet>('cables');
   const [filter, setFilter] = useState<StatusFilter>(ALL_STATUSES);
-  const schedule = useMemo(() => {
-    if (!open) return null;
-    if (sheet === 'cables') return cableSchedule(doc, results);
-    if (sheet === 'loads') return loadSchedule(doc, results);
-    return boardSchedule(doc, results);
-  }, [open, sheet, doc, results]);
+  const schedule = useMemo(
+    () => (open ? SCHEDULE_SHEETS[sheet].build(doc, results) : null),
+    [open, sheet, doc, results],
+  );
   if (!open || !schedule) return null;
 
   const counts = FILTER_KEYS.map(
@@ -77,10 +73,9 @@ export function SchedulesDrawer() {
           data-testid="schedule-csv"
           title="Download this schedule as a CSV file: every row, whatever the filter, with the project details, the data used and the cautions at the top."
           onClick={() => {
-            const title = SHEETS.find((x) => x.id === sheet)?.label ?? 'Schedule';
+            const { title, statusLabel } = SCHEDULE_SHEETS[sheet];
             const name = scheduleFileName(doc, title);
-            const status = sheet === 'loads' ? 'Status' : 'Status (worst load fed)';
-            download(scheduleCsv(title, schedule, doc, results, status), name, 'text/csv;charset=utf-8');
+            download(scheduleCsv(title, schedule, doc, results, statusLabel), name, 'text/csv;charset=utf-8');
             notify(`Downloaded ${name}.`);
           }}
         >

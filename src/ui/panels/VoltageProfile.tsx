@@ -1,5 +1,5 @@
 import type { Profile } from './buildProfile.ts';
-import { fmt } from './format.ts';
+import { fmt } from '../../export/format.ts';
 import { STATUS_LOOK } from '../status.ts';
 
 const W = 330;

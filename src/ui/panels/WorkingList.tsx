@@ -1,5 +1,5 @@
 import type { Working } from '../../solver/results.ts';
-import { fmtValue } from './format.ts';
+import { fmtValue } from '../../export/format.ts';
 
 /**
  * The solver's working, step by step: each record shows its formula, the inputs with units and

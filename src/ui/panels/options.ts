@@ -1,5 +1,6 @@
 /** Choice lists for the details forms, with plain labels. Trade terms keep their usual names. */
 import { LOAD_KINDS, PHASES } from '../../model/types.ts';
+import { LOAD_KIND_LABELS } from '../../export/labels.ts';
 
 const opt = (value: string, label: string) => ({ value, label });
 
@@ -15,17 +16,6 @@ export const OWNERSHIP_OPTIONS = [
   opt('private', 'Private (own transformer)'),
 ];
 
-const LOAD_KIND_LABELS: Record<string, string> = {
-  lighting: 'Lighting',
-  sockets: 'Socket outlets',
-  heating: 'Heating',
-  cooking: 'Cooking',
-  waterHeating: 'Water heating',
-  motor: 'Motor',
-  evCharging: 'EV charging',
-  hvac: 'Air handling',
-  other: 'Other',
-};
 export const LOAD_KIND_OPTIONS = LOAD_KINDS.map((k) => opt(k, LOAD_KIND_LABELS[k] ?? k));
 export const CATEGORY_OPTIONS = [opt('lighting', 'Lighting limit'), opt('other', 'Other uses limit')];
 export const DEMAND_UNIT_OPTIONS = [opt('W', 'W'), opt('kW', 'kW'), opt('kVA', 'kVA'), opt('A', 'A')];

@@ -1,6 +1,6 @@
 /** Sorting and status filtering of schedule rows. */
 import type { Status } from '../../solver/results.ts';
-import type { Row } from './scheduleRows.ts';
+import type { Row } from '../../export/schedules.ts';
 
 const STATUS_RANK: Record<Status, number> = { within: 0, close: 1, over: 2 };
 

@@ -11,7 +11,7 @@ import {
   type TreeSizingResult,
 } from '../../solver/sizing/proposeTreeSizing.ts';
 import { DEFAULT_SIZING, type SizeChange, type SizingOptions } from '../../solver/sizing/sizingCore.ts';
-import { fmt } from './format.ts';
+import { fmt } from '../../export/format.ts';
 import type { ProposalRow, ProposalSet } from './proposals.ts';
 
 const SLICE_MS = 30;

@@ -35,6 +35,7 @@ describe('arguments', () => {
       json: true,
       workingId: null,
       dataFile: null,
+      schedule: null,
     });
     expect(parseArgs(['check', '--working=C3', 'a.json'])).toMatchObject({ workingId: 'C3' });
     expect(parseArgs([])).toEqual({ command: 'help' });

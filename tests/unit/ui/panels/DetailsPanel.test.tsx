@@ -4,7 +4,7 @@ import { describe, expect, test } from 'vitest';
 import { DetailsPanel } from '../../../../src/ui/panels/DetailsPanel.tsx';
 import { editorStore } from '../../../../src/store/editorStore.ts';
 import { solve } from '../../../../src/solver/solve.ts';
-import { fmt } from '../../../../src/ui/panels/format.ts';
+import { fmt } from '../../../../src/export/format.ts';
 import { loadIntoStore, smallNetwork } from './harness.ts';
 
 function lengthInput() {

@@ -5,7 +5,7 @@ import { SchedulesDrawer } from '../../../../src/ui/panels/SchedulesDrawer.tsx';
 import { FindingsList } from '../../../../src/ui/panels/FindingsList.tsx';
 import { editorStore } from '../../../../src/store/editorStore.ts';
 import { solve } from '../../../../src/solver/solve.ts';
-import { fmt } from '../../../../src/ui/panels/format.ts';
+import { fmt } from '../../../../src/export/format.ts';
 import { loadIntoStore, smallNetwork } from './harness.ts';
 
 const rowIds = (table: HTMLElement) =>

@@ -1,5 +1,5 @@
 /** Display formatting only: how many digits a figure shows. No electrical arithmetic here. */
-import type { Percent } from '../../solver/results.ts';
+import type { Percent } from '../solver/results.ts';
 
 /** A figure to three significant digits, or two decimals under 10, without float noise. */
 export function fmt(value: number | null | undefined, digits?: number): string {

@@ -4,11 +4,11 @@
  * every row of the schedule whatever the view's filter. Cells hold the text the schedule shows,
  * so the file and the screen agree figure for figure; a figure with no value is left empty.
  */
-import type { ProjectDocument } from '../../model/types.ts';
-import { CAUTIONS } from '../../model/cautions.ts';
-import type { Results } from '../../solver/results.ts';
-import { STATUS_SHOWN } from '../../solver/results.ts';
-import type { Schedule } from './scheduleRows.ts';
+import type { ProjectDocument } from '../model/types.ts';
+import { CAUTIONS } from '../model/cautions.ts';
+import type { Results } from '../solver/results.ts';
+import { STATUS_SHOWN } from '../solver/results.ts';
+import type { Schedule } from './schedules.ts';
 
 /** The byte order mark: without it, some spreadsheets read "mm²" and "Ω" in the wrong encoding. */
 const BOM = '\uFEFF';

@@ -1,11 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
-import { csvField, scheduleCsv, scheduleFileName } from '../../../../src/ui/panels/scheduleCsv.ts';
-import { boardSchedule, cableSchedule } from '../../../../src/ui/panels/scheduleRows.ts';
-import { parseDocument } from '../../../../src/model/parseDocument.ts';
-import { solve } from '../../../../src/solver/solve.ts';
-import { CAUTIONS } from '../../../../src/model/cautions.ts';
-import type { ProjectDocument } from '../../../../src/model/types.ts';
+import { csvField, scheduleCsv, scheduleFileName } from '../../../src/export/scheduleCsv.ts';
+import { boardSchedule, cableSchedule } from '../../../src/export/schedules.ts';
+import { parseDocument } from '../../../src/model/parseDocument.ts';
+import { solve } from '../../../src/solver/solve.ts';
+import { CAUTIONS } from '../../../src/model/cautions.ts';
+import type { ProjectDocument } from '../../../src/model/types.ts';
 
 function demo(): ProjectDocument {
   const parsed = parseDocument(readFileSync('public/demo-project.json', 'utf8'));

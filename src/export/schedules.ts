@@ -3,11 +3,11 @@
  * raw value (for sorting) and its display text. No figure is computed here beyond picking the
  * solver's own values and the document's inputs.
  */
-import type { Device, Id, NodeElement, ProjectDocument } from '../../model/types.ts';
-import type { Results, Status } from '../../solver/results.ts';
-import type { Check, NodeProtection } from '../../solver/protection/protectionResults.ts';
+import type { Device, Id, NodeElement, ProjectDocument } from '../model/types.ts';
+import type { Results, Status } from '../solver/results.ts';
+import type { Check, NodeProtection } from '../solver/protection/protectionResults.ts';
 import { fmt } from './format.ts';
-import { LOAD_KIND_OPTIONS } from './options.ts';
+import { LOAD_KIND_LABELS } from './labels.ts';
 
 export type Cell = { sort: number | string | null; text: string };
 
@@ -190,7 +190,7 @@ export function loadSchedule(doc: ProjectDocument, results: Results): Schedule {
         status: r?.status ?? null,
         cells: {
           name: txt(l.name || l.id),
-          kind: txt(LOAD_KIND_OPTIONS.find((o) => o.value === l.loadKind)?.label ?? l.loadKind),
+          kind: txt(LOAD_KIND_LABELS[l.loadKind] ?? l.loadKind),
           fedFrom: txt(nameOf(nodes, feeder?.from)),
           demand: { sort: l.demand.value, text: `${fmt(l.demand.value)} ${l.demand.unit}` },
           phase: txt(l.phases === 3 ? '3-phase' : l.phase),
@@ -257,3 +257,20 @@ export function boardSchedule(doc: ProjectDocument, results: Results): Schedule 
     });
   return { columns, rows };
 }
+
+export type ScheduleSheet = 'cables' | 'loads' | 'boards';
+
+/**
+ * The three schedules by name, as the editor's drawer and `dropline check --schedule` offer them:
+ * title, builder, and what the status column means on that sheet.
+ */
+export const SCHEDULE_SHEETS: Readonly<
+  Record<
+    ScheduleSheet,
+    { title: string; build: (doc: ProjectDocument, results: Results) => Schedule; statusLabel: string }
+  >
+> = {
+  cables: { title: 'Cable schedule', build: cableSchedule, statusLabel: 'Status (worst load fed)' },
+  loads: { title: 'Loads', build: loadSchedule, statusLabel: 'Status' },
+  boards: { title: 'Board schedule', build: boardSchedule, statusLabel: 'Status (worst load fed)' },
+};
