@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { expect, test } from 'vitest';
 import { parseArgs } from '../../../src/cli/args.ts';
-import { runCli, type CliIo } from '../../../src/cli/run.ts';
+import { runInMemory } from '../../fixtures/memoryIo.ts';
 
 const files: Record<string, string> = {
   'site.json': readFileSync('tests/fixtures/cli-pass.json', 'utf8'),
@@ -11,21 +11,7 @@ const files: Record<string, string> = {
   'broken.csv': 'material,insulation,construction,sizeMm2,mvPerAm1phR\nCu,hot,flatTwinEarth,2.5,18\n',
 };
 
-function run(argv: string[]) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const io: CliIo = {
-    stdout: (t) => out.push(t),
-    stderr: (t) => err.push(t),
-    readText(path) {
-      const t = files[path];
-      if (t === undefined) throw Object.assign(new Error('missing'), { code: 'ENOENT' });
-      return t;
-    },
-  };
-  const code = runCli(argv, io);
-  return { code, out: out.join(''), err: err.join('') };
-}
+const run = (argv: string[]) => runInMemory(files, argv);
 
 test('--data is parsed with its file', () => {
   expect(parseArgs(['check', 'a.json', '--data', 't.csv'])).toMatchObject({ dataFile: 't.csv' });

@@ -5,27 +5,13 @@ import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { parseArgs } from '../../../src/cli/args.ts';
 import { nodeIo, runCli } from '../../../src/cli/run.ts';
-import type { CliIo } from '../../../src/cli/run.ts';
 import { summarise } from '../../../src/cli/summary.ts';
 import { STATUS_TEXT } from '../../../src/cli/report.ts';
+import { memoryIo } from '../../fixtures/memoryIo.ts';
 import { STATUS_LOOK } from '../../../src/ui/status.ts';
 import { serializeDocument } from '../../../src/model/serializeDocument.ts';
 import { newProject } from '../../../src/model/defaults.ts';
 import type { Results } from '../../../src/solver/results.ts';
-
-function memoryIo(files: Record<string, string>) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const io: CliIo = {
-    stdout: (t) => out.push(t),
-    stderr: (t) => err.push(t),
-    readText(path) {
-      if (!(path in files)) throw Object.assign(new Error('missing'), { code: 'ENOENT' });
-      return files[path]!;
-    },
-  };
-  return { io, out: () => out.join(''), err: () => err.join('') };
-}
 
 describe('arguments', () => {
   test('check with options', () => {

@@ -2,27 +2,14 @@
 import { readFileSync } from 'node:fs';
 import { expect, test } from 'vitest';
 import { parseArgs } from '../../../src/cli/args.ts';
-import { runCli, type CliIo } from '../../../src/cli/run.ts';
+import { runInMemory } from '../../fixtures/memoryIo.ts';
 import { parseDocument } from '../../../src/model/parseDocument.ts';
 import { solve } from '../../../src/solver/solve.ts';
 import { CAUTIONS } from '../../../src/model/cautions.ts';
 
 const demoText = readFileSync('public/demo-project.json', 'utf8');
 
-function run(argv: string[]) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const io: CliIo = {
-    stdout: (t) => out.push(t),
-    stderr: (t) => err.push(t),
-    readText(path) {
-      if (path !== 'demo.json') throw Object.assign(new Error('missing'), { code: 'ENOENT' });
-      return demoText;
-    },
-  };
-  const code = runCli(argv, io);
-  return { code, out: out.join(''), err: err.join('') };
-}
+const run = (argv: string[]) => runInMemory({ 'demo.json': demoText }, argv);
 
 test('--schedule takes one of cables, loads or boards, and not with --json or --working', () => {
   expect(parseArgs(['check', 'a.json', '--schedule', 'boards'])).toMatchObject({ schedule: 'boards' });
