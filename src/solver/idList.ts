@@ -38,3 +38,27 @@ export class IdList implements IdsByPosition {
     this.#blocks[i >> SHIFT]![i & MASK] = id;
   }
 }
+
+/**
+ * Any values by position, in blocks like IdList (a plain array this long would be a large object,
+ * mapped afresh on every solve).
+ */
+export class ValueList {
+  readonly #blocks: unknown[][];
+
+  constructor(length: number) {
+    const count = Math.ceil(length / BLOCK);
+    this.#blocks = new Array<unknown[]>(count);
+    for (let b = 0; b < count; b++)
+      this.#blocks[b] = new Array<unknown>(Math.min(BLOCK, length - b * BLOCK)).fill(undefined);
+  }
+
+  /** The value at `i`; undefined where none was set. */
+  at(i: number): unknown {
+    return this.#blocks[i >> SHIFT]![i & MASK];
+  }
+
+  set(i: number, value: unknown): void {
+    this.#blocks[i >> SHIFT]![i & MASK] = value;
+  }
+}

@@ -56,6 +56,13 @@ describe('topology findings', () => {
       .cable('X3', 'L1', 'L2')
       .doc();
     expect(codes(doc)).toEqual(expect.arrayContaining(['unknownEnd', 'feedsSupply', 'fromLoad', 'island']));
+    // Each message names the cable, the node and the fix.
+    const message = (code: string) => solveDrop(doc).findings.find((f) => f.code === code)?.message;
+    expect(message('unknownEnd')).toBe(
+      'cable X1: to names no node (got "NOPE"); connect it to an existing board, junction, load or the supply.',
+    );
+    expect(message('feedsSupply')).toMatch(/^cable X2 runs into supply S; .* Swap its ends\.$/);
+    expect(message('fromLoad')).toMatch(/^cable X3 starts at load L1; loads are end points\./);
   });
 
   it('no supply, or two supplies', () => {
