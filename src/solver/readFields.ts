@@ -146,7 +146,7 @@ export function readNode(s: DropState, i: number, el: Loose, kind: number): void
   } else s.nodeCheck[i] = 1;
 }
 
-/** Stores a tree cable's length, conductor row, parallel count and phases; flags it when a field is not well formed. */
+/** Stores a cable's length, conductor row, parallel count and phases (every cable with an id of its own); flags it when a field is not well formed. */
 export function readCable(s: DropState, j: number, c: Loose, rows: RowMemo): void {
   const phases = c.phases;
   s.cablePhasesField[j] = phases === 3 ? 3 : phases === 1 ? 1 : 0;

@@ -111,14 +111,14 @@ export function buildTopology(s: DropState): void {
   }
 
   const rows = new RowMemo(s.catalogue, s.rows);
-  // Cable ids are claimed in a loop of their own, and the tree's cables read in another after the
-  // ends are found. Each small loop's iterations do not wait on each other, so the processor
-  // overlaps their reads of memory; inside one long loop each read waited behind the rest of the
-  // cable's work. At 100,000 elements the cables cost about 1.5 ms less this way, at 10,000 the
-  // same (benchmark machine, paired runs). `childCables` holds each cable's claim until the
-  // adjacency below overwrites it. The claim loop also keeps each cable's two ends, read from
-  // the same line of memory as its id, so the loop that finds the ends does not read the cable
-  // again (at 100k the cables no longer fit in cache between the loops).
+  // The cables are read once, in a loop of their own: each cable's id is claimed, its two ends
+  // kept and its fields read (readFields.ts). The ends are then found in a second loop that reads
+  // no cable (a cable with a problem is read again for its message only). Each loop's iterations
+  // do not wait on each other, so the processor overlaps their reads of memory; in one long loop
+  // each read waited behind the rest of the cable's work, and at 100,000 elements the cables no
+  // longer stay in cache from one loop to the next. Paired benchmark runs: each step took the
+  // 10k → 100k scaling down by 0.1 to 0.6, the 10k solve unchanged (docs/solver.md).
+  // `childCables` holds each cable's claim until the adjacency below overwrites it.
   const holder = s.childCables;
   const fromIds = new ValueList(m);
   const toIds = new ValueList(m);
@@ -130,6 +130,7 @@ export function buildTopology(s: DropState): void {
     if (claim === j) {
       fromIds.set(j, (c as Loose).from);
       toIds.set(j, (c as Loose).to);
+      readCable(s, j, c as Loose, rows);
     }
   }
   // childStart[from + 1] counts children first, then becomes the start of each list.
@@ -165,6 +166,8 @@ export function buildTopology(s: DropState): void {
     const problem = cableProblem(s, cables, j, from, to);
     if (problem) {
       findings.push(problem);
+      // A cable left out of the tree shows no conductor figures (its r and x read as not known).
+      s.cableRowAt[j] = 0;
       continue;
     }
     parentCable[to as number] = j;
@@ -172,10 +175,6 @@ export function buildTopology(s: DropState): void {
     cableTo[j] = to as number;
     start[(from as number) + 1] = (start[(from as number) + 1] as number) + 1;
   }
-  // The tree's cables' fields (see the claims above for why this is a loop of its own).
-  for (let j = 0; j < m; j++)
-    if ((cableFrom[j] as number) >= 0) readCable(s, j, cables[j] as unknown as Loose, rows);
-
   // Children as one flat list (compressed adjacency) so the walk allocates nothing per node.
   for (let i = 0; i < n; i++) start[i + 1] = (start[i + 1] as number) + (start[i] as number);
   const childCables = s.childCables;

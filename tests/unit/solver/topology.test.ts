@@ -109,6 +109,9 @@ describe('topology findings', () => {
     expect(r.cables.C2?.solved).toBe(true);
     expect(r.loads.L1?.path).toEqual(['C1', 'C2']);
     expect(r.loads.L2?.solved).toBe(false);
+    // A cable left out of the tree has no conductor figures, though its fields were read.
+    expect(r.cables.C4?.rOhmPerM).toBeNaN();
+    expect(r.cables.C4?.solved).toBe(false);
   });
 });
 
