@@ -95,7 +95,13 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
     col('device', 'Device', 'Protective device at the sending end', false),
     col('ib', 'Ib A', 'Design current Ib, worst phase, amperes'),
     col('dropV', 'Drop V', 'Drop in this segment, volts'),
-    col('dropPct', 'Drop %', 'Drop in this segment, % of the basis shown on each row'),
+    col('dropPct', 'Drop %', 'Drop in this segment, % of the voltage in the next column'),
+    col(
+      'dropBasis',
+      'of',
+      'What the segment drop is a share of: U0 (single-phase, or per phase) or ULL (balanced three-phase)',
+      false,
+    ),
     col('cumPct', 'Cum. %', 'Cumulative drop from the origin at the far end, % of U0'),
     col('maxLen', 'Max m', 'Longest run within the drop budget left on its worst path, metres'),
     col('in', 'In A', 'Rating of the device protecting the segment, amperes'),
@@ -136,9 +142,8 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
         ),
         ib: num(r?.ibA),
         dropV: num(r?.dropV),
-        dropPct: r
-          ? { sort: r.dropPct.value, text: `${fmt(r.dropPct.value, 2)} (${r.dropPct.basis})` }
-          : num(null),
+        dropPct: num(r?.dropPct.value, 2),
+        dropBasis: txt(r ? r.dropPct.basis : '–'),
         cumPct: num(r?.cumulativePct.value, 2),
         maxLen: num(r?.maxLengthM, 0),
         in: num(p?.device?.ratingA, 0),

@@ -86,6 +86,12 @@ describe('schedule as CSV', () => {
     const at = (id: string) => 2 + schedule.columns.findIndex((c) => c.id === id);
     expect(row[at('ib')]).toBe(shown.cells.ib!.text);
     expect(Number(row[at('cumPct')])).toBeCloseTo(results.cables[shown.id]!.cumulativePct.value, 2);
+    // The segment drop is a number a spreadsheet can add, its basis in the next column.
+    const drop = results.cables[shown.id]!.dropPct;
+    expect(Number(row[at('dropPct')])).toBeCloseTo(drop.value, 2);
+    expect(row[at('dropBasis')]).toBe(drop.basis);
+    const bases = new Set(body.map((r) => r[at('dropBasis')]));
+    expect([...bases].sort()).toEqual(['U0', 'ULL']);
     expect(row[1]).toBe({ within: 'clear', close: 'tight', over: 'over' }[shown.status!]);
   });
 
