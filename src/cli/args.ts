@@ -13,10 +13,12 @@ export type CliArgs =
       workingId: string | null;
       dataFile: string | null;
       schedule: ScheduleSheet | null;
+      /** Where to write the tender pack PDF, or null. */
+      pdfFile: string | null;
     }
   | { command: 'error'; message: string };
 
-export const USAGE = `usage: dropline check FILE [--json | --working ID | --schedule SHEET] [--data TABLE]
+export const USAGE = `usage: dropline check FILE [--json | --working ID | --schedule SHEET] [--pdf OUT.pdf] [--data TABLE]
 
 Checks a Dropline project file: solves it and prints, per load, its path, cumulative drop, limit
 and status; per cable, Ib, drop in V and % and the cumulative %; every finding; the cautions; the
@@ -29,6 +31,9 @@ options:
                  print the cable, load or board schedule (SHEET: cables, loads or boards) as CSV, as
                  the editor's Download CSV writes it: project details, data used and cautions, then
                  one row per element
+  --pdf OUT.pdf  also write the tender pack to OUT.pdf (A3 landscape): the single-line diagram, a
+                 summary with the data, standards and cautions used, the schedules, the findings and
+                 the working behind every figure; the report is printed as usual
   --data TABLE   use your own conductor data set (CSV or JSON, shape: docs/catalogue-data.md) instead
                  of the built-in one; the report and every working record name it
   --help         show this text
@@ -36,7 +41,8 @@ options:
 exit status:
   0  every load is within its limit and there is no error finding
   1  a load is over its limit, or a check failed (any error finding)
-  2  the file could not be read or is not a valid project file, or the command line is wrong
+  2  the file could not be read or is not a valid project file, the --pdf file could not be
+     written, or the command line is wrong
   3  internal error while solving (please report it with the file)`;
 
 /**
@@ -55,6 +61,7 @@ export function parseArgs(argv: readonly string[]): CliArgs {
   let workingId: string | null = null;
   let dataFile: string | null = null;
   let schedule: ScheduleSheet | null = null;
+  let pdfFile: string | null = null;
   for (let i = 0; i < rest.length; i++) {
     const a = rest[i]!;
     if (a === '--json') json = true;
@@ -72,7 +79,12 @@ export function parseArgs(argv: readonly string[]): CliArgs {
       dataFile = f;
       i++;
     } else if (a.startsWith('--data=')) dataFile = a.slice('--data='.length);
-    else if (a === '--schedule' || a.startsWith('--schedule=')) {
+    else if (a === '--pdf' || a.startsWith('--pdf=')) {
+      const out = a === '--pdf' ? rest[++i] : a.slice('--pdf='.length);
+      if (out === undefined || out === '' || out.startsWith('--'))
+        return { command: 'error', message: '--pdf needs a file to write, e.g. --pdf site-tender-pack.pdf' };
+      pdfFile = out;
+    } else if (a === '--schedule' || a.startsWith('--schedule=')) {
       const sheet = a === '--schedule' ? rest[++i] : a.slice('--schedule='.length);
       if (!SHEET_NAMES.includes(sheet as ScheduleSheet))
         return {
@@ -88,5 +100,5 @@ export function parseArgs(argv: readonly string[]): CliArgs {
     return { command: 'error', message: 'name the project file to check, e.g. dropline check site.json' };
   if ([json, workingId !== null, schedule !== null].filter(Boolean).length > 1)
     return { command: 'error', message: 'choose one of --json, --working and --schedule' };
-  return { command: 'check', file, json, workingId, dataFile, schedule };
+  return { command: 'check', file, json, workingId, dataFile, schedule, pdfFile };
 }

@@ -2,7 +2,7 @@
  * The CLI's logic, separate from the process so it can be tested in-process: arguments and a file
  * reader in, text and an exit status out.
  */
-import { readFileSync, statSync } from 'node:fs';
+import { readFileSync, renameSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
 import { parseDocument } from '../model/parseDocument.ts';
 import { MAX_TEXT_CHARS } from '../model/safeJson.ts';
 import type { ProjectDocument } from '../model/types.ts';
@@ -17,12 +17,25 @@ import { summarise } from './summary.ts';
 import { formatElementWorking, similarIds } from './working.ts';
 import { SCHEDULE_SHEETS } from '../export/schedules.ts';
 import { scheduleCsv } from '../export/scheduleCsv.ts';
+import { tenderPackBytes, type PackFonts } from '../export/pdf/tenderPack.ts';
 
 export interface CliIo {
   stdout(text: string): void;
   stderr(text: string): void;
   /** Reads a file as UTF-8 text; throws with a Node error code when it cannot. */
   readText(path: string): string;
+  /** Writes a file whole, or throws with a Node error code and leaves any earlier copy as it was. */
+  writeBytes(path: string, bytes: Uint8Array): void;
+  /** The tender pack's font (the TrueType files shipped in public/fonts). */
+  packFonts(): PackFonts;
+}
+
+const FONT_DIR = new URL('../../public/fonts/', import.meta.url);
+
+/** Reads the pack's font files from the package. */
+export function packFontsFromDisk(): PackFonts {
+  const read = (name: string) => readFileSync(new URL(name, FONT_DIR)).toString('base64');
+  return { regular: read('DejaVuSansCondensed.ttf'), bold: read('DejaVuSansCondensed-Bold.ttf') };
 }
 
 export const nodeIo: CliIo = {
@@ -35,6 +48,22 @@ export const nodeIo: CliIo = {
     if (st.size > MAX_TEXT_CHARS * 4) throw Object.assign(new Error('too large'), { code: 'EFBIG' });
     return readFileSync(path, 'utf8');
   },
+  writeBytes(path, bytes) {
+    // Written beside the target and renamed over it: a failed write leaves the last good copy.
+    const temp = `${path}.${process.pid}.part`;
+    try {
+      writeFileSync(temp, bytes);
+      renameSync(temp, path);
+    } catch (e) {
+      try {
+        unlinkSync(temp);
+      } catch {
+        // Nothing was written.
+      }
+      throw e;
+    }
+  },
+  packFonts: packFontsFromDisk,
 };
 
 function readError(file: string, e: unknown): string {
@@ -52,6 +81,36 @@ function readError(file: string, e: unknown): string {
               ? e.message
               : String(e);
   return `dropline: cannot read ${file}: ${why}\n`;
+}
+
+/** Writes the tender pack; false (with the reason on stderr) when it could not be written. */
+function writePack(io: CliIo, path: string, doc: ProjectDocument, results: Results): boolean {
+  let bytes: Uint8Array;
+  try {
+    bytes = tenderPackBytes(doc, results, io.packFonts());
+  } catch (e) {
+    io.stderr(`dropline: could not make the tender pack: ${e instanceof Error ? e.message : String(e)}\n`);
+    return false;
+  }
+  try {
+    io.writeBytes(path, bytes);
+  } catch (e) {
+    const code = (e as { code?: string }).code;
+    const why =
+      code === 'ENOENT'
+        ? 'its folder does not exist'
+        : code === 'EACCES' || code === 'EPERM'
+          ? 'permission denied'
+          : code === 'EISDIR'
+            ? 'it is a directory'
+            : e instanceof Error
+              ? e.message
+              : String(e);
+    io.stderr(`dropline: cannot write ${path}: ${why}; choose another --pdf path\n`);
+    return false;
+  }
+  io.stderr(`dropline: tender pack written to ${path} (${Math.round(bytes.length / 1024)} kB)\n`);
+  return true;
 }
 
 /**
@@ -121,6 +180,7 @@ export function runCli(
     return 3;
   }
   const summary = summarise(results);
+  if (args.pdfFile !== null && !writePack(io, args.pdfFile, parsed.doc, results)) return 2;
 
   if (args.workingId !== null) {
     const text = formatElementWorking(parsed.doc, results, args.workingId);

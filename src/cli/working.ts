@@ -2,11 +2,7 @@
 import type { ProjectDocument } from '../model/types.ts';
 import type { Results, Working } from '../solver/results.ts';
 import { wrap } from './format.ts';
-
-function valueText(v: number | string, unit: string): string {
-  const n = typeof v === 'number' ? (Number.isFinite(v) ? String(Number(v.toPrecision(6))) : String(v)) : v;
-  return unit ? `${n} ${unit}` : n;
-}
+import { valueText, workingRecords } from '../export/working.ts';
 
 /** One record: title, formula, inputs with units and sources, result, and any simplification. */
 export function formatWorking(w: Working, indent = '  '): string {
@@ -17,31 +13,6 @@ export function formatWorking(w: Working, indent = '  '): string {
   lines.push(`${indent}  result: ${valueText(w.result.value, w.result.unit)}`);
   if (w.note) lines.push(wrap(`note: ${w.note}`, 100, `${indent}    `, `${indent}  `));
   return lines.join('\n');
-}
-
-/** Every working record the results hold for an element, with where each sits. */
-export function workingRecords(results: Results, id: string): { title: string; records: Working[] }[] | null {
-  const own = (o: object, k: string) => Object.prototype.hasOwnProperty.call(o, k);
-  const groups: { title: string; records: Working[] }[] = [];
-  if (own(results.cables, id)) {
-    const c = results.cables[id]!;
-    groups.push({ title: 'Drop', records: c.working });
-    // The same sections, in the same order, as the editor's details panel.
-    if (c.protection) {
-      groups.push({ title: 'Capacity and R1 + R2', records: c.protection.working });
-      groups.push({ title: 'Protection checks', records: c.protection.checks.map((k) => k.working) });
-    }
-  } else if (own(results.nodes, id)) {
-    const n = results.nodes[id]!;
-    groups.push({ title: 'Drop', records: n.working });
-    if (n.protection) {
-      groups.push({ title: 'Loop impedance and fault level', records: n.protection.working });
-      groups.push({ title: 'Protection checks', records: n.protection.checks.map((k) => k.working) });
-    }
-  } else {
-    return null;
-  }
-  return groups;
 }
 
 /**

@@ -1,5 +1,6 @@
 // Browser tests for the details panel, schedules, findings and dialogs, on the demo project.
 // Figures on screen are compared with the engine's own, solved here in Node from the same file.
+import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { afterEach, beforeEach, expect, inject, test } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -106,6 +107,43 @@ test('the cable schedule downloads as a CSV that holds every cable with the engi
   expect(lines.slice(head + 1, -1).map((l) => l.split(',')[0])).toEqual(doc.cables.map((c) => c.id));
   const worst = doc.cables.find((c) => results.cables[c.id]?.status === 'over')!;
   expect(lines.find((l) => l.startsWith(`${worst.id},`))?.split(',')[1]).toBe('over');
+  expect(s.errors).toEqual([]);
+});
+
+test('Tender pack PDF downloads the pack of the open project, as a PDF reader sees it', async () => {
+  const doc = demo();
+  const results = solve(doc);
+  const ui = new Panels(s.page);
+  await ui.start();
+  const [file] = await Promise.all([
+    s.page.waitForEvent('download', { timeout: 60_000 }),
+    s.page.getByTestId('export-pack').click(),
+  ]);
+  expect(file.suggestedFilename()).toBe(
+    `${doc.details.reference}-rev-${doc.details.revision}-tender-pack.pdf`,
+  );
+  const path = (await file.path())!;
+  // poppler reads it back: A3 landscape, the sheets, the figures the engine gives.
+  expect(execFileSync('pdfinfo', [path], { encoding: 'utf8' })).toMatch(
+    /Page size:\s+1190\.55 x 841\.89 pts \(A3\)/,
+  );
+  const text = execFileSync('pdftotext', ['-raw', '-enc', 'UTF-8', path, '-'], { encoding: 'utf8' }).replace(
+    /\s+/g,
+    ' ',
+  );
+  for (const sheet of [
+    'Single-line diagram',
+    'Summary, data and cautions',
+    'Cable schedule',
+    'Findings',
+    'Working',
+  ])
+    expect(text).toContain(sheet);
+  expect(text).toContain('Design aid only.');
+  for (const c of doc.cables) expect(text).toContain(c.id);
+  const over = Object.entries(results.loads).find(([, l]) => l.status === 'over')!;
+  expect(text).toContain(`Load ${over[0]}`);
+  await expect(s.page.getByTestId('notice').textContent()).resolves.toContain('Downloaded');
   expect(s.errors).toEqual([]);
 });
 

@@ -3,6 +3,7 @@ import { useEditor } from '../../store/editorStore.ts';
 import { canvas } from '../canvasApi.ts';
 import { tidy } from '../actions.ts';
 import { newDocument, openFile, saveProject } from '../files/fileActions.ts';
+import { exportTenderPack } from '../files/exportPack.ts';
 import { shortcutText } from '../shortcuts.ts';
 
 function Btn(props: {
@@ -75,6 +76,7 @@ export function TopBar() {
           testId="file-save"
         />
         <Btn label="Save as…" onClick={() => void saveProject(true)} keys={shortcutText('saveAs')} />
+        <Btn label="Tender pack PDF" onClick={() => void exportTenderPack()} testId="export-pack" />
         <input
           ref={input}
           type="file"

@@ -111,7 +111,11 @@ export async function saveProject(asNew = false): Promise<void> {
 }
 
 /** Hands `text` to the browser as a downloaded file named `name`. */
-export function download(text: string, name: string, type = 'application/json'): void {
+export function download(
+  text: string | Uint8Array<ArrayBuffer>,
+  name: string,
+  type = 'application/json',
+): void {
   const url = URL.createObjectURL(new Blob([text], { type }));
   const a = document.createElement('a');
   a.href = url;

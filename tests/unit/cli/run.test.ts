@@ -22,6 +22,7 @@ describe('arguments', () => {
       workingId: null,
       dataFile: null,
       schedule: null,
+      pdfFile: null,
     });
     expect(parseArgs(['check', '--working=C3', 'a.json'])).toMatchObject({ workingId: 'C3' });
     expect(parseArgs([])).toEqual({ command: 'help' });
