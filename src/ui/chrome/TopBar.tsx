@@ -13,6 +13,8 @@ function Btn(props: {
   disabled?: boolean;
   testId?: string;
   pressed?: boolean;
+  /** A longer explanation for the tooltip. */
+  hint?: string;
 }) {
   return (
     <button
@@ -20,7 +22,7 @@ function Btn(props: {
       className="ed-btn"
       onClick={props.onClick}
       disabled={props.disabled}
-      title={props.keys ? `${props.label} (${props.keys})` : props.label}
+      title={props.hint ?? (props.keys ? `${props.label} (${props.keys})` : props.label)}
       data-testid={props.testId}
       aria-pressed={props.pressed}
     >
@@ -76,7 +78,12 @@ export function TopBar() {
           testId="file-save"
         />
         <Btn label="Save as…" onClick={() => void saveProject(true)} keys={shortcutText('saveAs')} />
-        <Btn label="Tender pack PDF" onClick={() => void exportTenderPack()} testId="export-pack" />
+        <Btn
+          label="Tender pack"
+          hint="Download the tender pack (PDF, A3): diagram, summary and cautions, schedules, findings and the working behind every figure"
+          onClick={() => void exportTenderPack()}
+          testId="export-pack"
+        />
         <input
           ref={input}
           type="file"
