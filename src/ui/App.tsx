@@ -13,6 +13,7 @@ import { FindingsList } from './panels/FindingsList.tsx';
 import { ProjectDialog } from './panels/ProjectDialog.tsx';
 import { SettingsDialog } from './panels/SettingsDialog.tsx';
 import { CautionsDialog } from './panels/CautionsDialog.tsx';
+import { PackDialog } from './panels/PackDialog.tsx';
 import { HelpOverlay } from './panels/HelpOverlay.tsx';
 import { SizingDialog } from './panels/SizingDialog.tsx';
 
@@ -50,6 +51,7 @@ export function App() {
       <ProjectDialog />
       <SettingsDialog />
       <CautionsDialog />
+      <PackDialog />
       <HelpOverlay />
       <SizingDialog />
       <FileProblemDialog />

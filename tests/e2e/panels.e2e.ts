@@ -117,7 +117,12 @@ test('Tender pack PDF downloads the pack of the open project, as a PDF reader se
   await ui.start();
   const [file] = await Promise.all([
     s.page.waitForEvent('download', { timeout: 60_000 }),
-    s.page.getByTestId('export-pack').click(),
+    (async () => {
+      await s.page.getByTestId('export-pack').click();
+      await s.page.getByTestId('pack-dialog').waitFor();
+      await screenshot(s.page, 'pack-dialog');
+      await s.page.getByTestId('pack-download').click();
+    })(),
   ]);
   expect(file.suggestedFilename()).toBe(
     `${doc.details.reference}-rev-${doc.details.revision}-tender-pack.pdf`,

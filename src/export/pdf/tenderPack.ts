@@ -66,7 +66,7 @@ export const PACK_METHODS: readonly string[] = [
   'Design current is the sum of the loads below, with each load’s demand factor and each board’s diversity, per phase; Ib of a cable is its worst phase. Where the settings say so, the device rating In is used for the drop instead (conservative).',
   'Loop impedance Zs = Ze + Σ (R1 + R2) along the path at operating temperature, compared with Cmin × U0 / Ia for the protective device. Prospective fault currents use the source impedance and the cables at 20 °C with cmax.',
   'Capacity Iz is the tabulated It times the ambient, grouping and insulation factors given for the circuit; combinations with no table are reported as not assessed, never guessed.',
-  'Status words: within (inside its limit), close (above the close-to-limit share of its budget), over (above its limit). Boards and cables show the worst load they feed.',
+  `Status words: ${(['within', 'close', 'over'] as const).map((k) => `${STATUS_LOOK[k].glyph} ${STATUS_LOOK[k].word} (${STATUS_LOOK[k].meaning})`).join(', ')}; boards and cables show the worst load they feed.`,
 ];
 
 type Rgb = [number, number, number];

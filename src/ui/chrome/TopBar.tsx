@@ -3,7 +3,6 @@ import { useEditor } from '../../store/editorStore.ts';
 import { canvas } from '../canvasApi.ts';
 import { tidy } from '../actions.ts';
 import { newDocument, openFile, saveProject } from '../files/fileActions.ts';
-import { exportTenderPack } from '../files/exportPack.ts';
 import { shortcutText } from '../shortcuts.ts';
 
 function Btn(props: {
@@ -80,8 +79,8 @@ export function TopBar() {
         <Btn label="Save as…" onClick={() => void saveProject(true)} keys={shortcutText('saveAs')} />
         <Btn
           label="Tender pack"
-          hint="Download the tender pack (PDF, A3): diagram, summary and cautions, schedules, findings and the working behind every figure"
-          onClick={() => void exportTenderPack()}
+          hint="The tender pack (PDF, A3): diagram, summary and cautions, schedules, findings and the working behind every figure"
+          onClick={() => openDialog('pack')}
           testId="export-pack"
         />
         <input

@@ -27,20 +27,22 @@ function packFonts(): Promise<PackFonts> {
   return fonts;
 }
 
-/** Builds the tender pack of the open project and downloads it. */
-export async function exportTenderPack(): Promise<void> {
+/** Builds the tender pack of the open project and downloads it (`working: false` leaves the working sheets out). */
+export async function exportTenderPack(options: { working?: boolean } = {}): Promise<void> {
   const s = useEditor.getState();
   s.notify('Making the tender pack…', 'info');
   try {
     const [pack, f] = await Promise.all([import('../../export/pdf/tenderPack.ts'), packFonts()]);
     // The project as it is now, solved as the canvas shows it.
     const { doc, results } = useEditor.getState();
-    const bytes = pack.tenderPackBytes(doc, results, f);
+    const bytes = pack.tenderPackBytes(doc, results, f, { working: options.working !== false });
     const name = pack.tenderPackFileName(doc);
     download(bytes as Uint8Array<ArrayBuffer>, name, 'application/pdf');
     useEditor
       .getState()
-      .notify(`Downloaded ${name}: diagram, summary and cautions, schedules, findings and working.`);
+      .notify(
+        `Downloaded ${name}: diagram, summary and cautions, schedules, findings${options.working === false ? '' : ' and working'}.`,
+      );
   } catch (e) {
     useEditor
       .getState()
