@@ -7,6 +7,7 @@ import { CAUTIONS } from '../model/cautions.ts';
 import { STATUS_SHOWN, type Results, type Status } from '../solver/results.ts';
 import { fixed, table, wrap } from './format.ts';
 import type { CheckSummary } from './summary.ts';
+import { projectDetailRows } from '../export/labels.ts';
 
 /** The same words (STATUS_SHOWN) and glyphs the editor shows (src/ui/status.ts); a test keeps the glyphs equal. */
 export const STATUS_TEXT: Readonly<Record<Status | 'none', string>> = {
@@ -37,17 +38,7 @@ export function pathNames(doc: ProjectDocument, path: readonly string[]): string
 }
 
 function header(doc: ProjectDocument, file: string): string {
-  const d = doc.details;
-  const rows: [string, string][] = [
-    ['Project', d.title],
-    ['Client', d.client],
-    ['Site', d.site],
-    ['Reference', d.reference],
-    ['Revision', d.revision],
-    ['Author', d.author],
-    ['Date', d.date],
-    ['File', file],
-  ];
+  const rows = [...projectDetailRows(doc.details), ['File', file] as [string, string]];
   const s = doc.settings;
   rows.push([
     'Supply system',
