@@ -34,6 +34,8 @@ export interface Seg {
 
 /** Text lines at `x` (left edge) and `top` (top of the first line), canvas units. */
 export interface Block {
+  /** The node or cable the label belongs to. */
+  of: string;
   x: number;
   top: number;
   maxW: number;
@@ -43,8 +45,10 @@ export interface Block {
 
 /** Everything the drawing step needs, laid out. */
 export interface Plan {
-  /** The page rectangle the drawing was fitted into, millimetres. */
+  /** The page rectangle the drawing was fitted into (at a fixed scale: the drawing's own extent), millimetres. */
   area: Box;
+  /** What the drawing covers with its labels' room, canvas units. */
+  bounds: Box;
   /** Millimetres per canvas unit. */
   scale: number;
   /** A canvas point on the page. */
@@ -71,7 +75,8 @@ const EM = 14;
 const MIN_PT = 4;
 const MAX_PT = 8;
 const ID_MIN_PT = 2.5;
-const GAP = 3;
+/** Space between a label and the line or symbol it sits beside, canvas units. */
+export const GAP = 3;
 /** How far a load's label may reach beyond its box on either side. */
 const SLACK = 12;
 const SIDE_W = 9 * EM;
@@ -218,7 +223,7 @@ interface Surroundings {
 }
 
 /** A cable's label in its band, right of its last run, moved below any horizontal run crossing it. */
-function cableBlock(band: Box, words: Seg[][][], around: Surroundings): Block {
+function cableBlock(band: Box, words: Seg[][][], around: Surroundings): Omit<Block, 'of'> {
   const { obstacles, across, right, width, lineH } = around;
   let top = band.y;
   for (let pass = 0; ; pass++) {
@@ -234,7 +239,7 @@ function cableBlock(band: Box, words: Seg[][][], around: Surroundings): Block {
   }
 }
 
-function nodeBlock(n: NodeElement, r: Box, lines: Seg[][], lineH: number): Block {
+function nodeBlock(n: NodeElement, r: Box, lines: Seg[][], lineH: number): Omit<Block, 'of'> {
   if (n.kind === 'load')
     return { x: r.x - SLACK, top: r.y + r.h + GAP, maxW: r.w + 2 * SLACK, centred: true, lines };
   if (n.kind === 'board') return { x: r.x + 10, top: r.y + 8, maxW: r.w - 20, centred: true, lines };
@@ -247,9 +252,19 @@ function nodeBlock(n: NodeElement, r: Box, lines: Seg[][], lineH: number): Block
   };
 }
 
+/** The scale at which labels print at `pt` points (below the 8 pt cap), millimetres per canvas unit. */
+export function scaleForLabelPt(pt: number): number {
+  return (pt * PT_MM) / EM;
+}
+
+/** The smallest label size printed in full, points. */
+export const LABEL_MIN_PT = MIN_PT;
+
 /**
  * Lays out the diagram of `doc` in `area` (millimetres): null when nothing has a position.
- * Cables to a missing or unplaced node are left out.
+ * Cables to a missing or unplaced node are left out. With `fixedScale` (millimetres per canvas
+ * unit) the drawing is not fitted: its top-left goes at the area's top-left at that scale, and the
+ * plan's area is the drawing's own extent there.
  *
  * @example
  *   const plan = planDiagram(doc, results, { x: 14, y: 22, w: 392, h: 225 }, measure);
@@ -260,6 +275,7 @@ export function planDiagram(
   results: Results,
   area: Box,
   measure: Measure,
+  fixedScale?: number,
 ): Plan | null {
   const nodes: Plan['nodes'] = [];
   const boxes = new Map<string, Box>();
@@ -275,15 +291,16 @@ export function planDiagram(
     // Results are built when first read: only the cables drawn build theirs.
     if (a && b) cables.push({ cable, route: route(a, b), status: results.cables[cable.id]?.status ?? null });
   }
-  if (nodes.length === 0 || !(area.w > 0 && area.h > 0)) return null;
+  if (nodes.length === 0 || (fixedScale === undefined && !(area.w > 0 && area.h > 0))) return null;
   // A cable's label goes right of its last vertical run, below the horizontal one.
   const bands = cables.map(({ route: p }) => span([p[2]![0], p[2]![1] + GAP], p[3]!));
   const bounds = union([
     ...nodes.map(({ node, r }) => footprint(node.kind, r)),
     ...bands.map((b) => ({ ...b, w: GAP + CABLE_LABEL_W })),
   ]);
-  const scale = Math.min(area.w / bounds.w, area.h / bounds.h);
+  const scale = fixedScale ?? Math.min(area.w / bounds.w, area.h / bounds.h);
   if (!(scale > 0 && Number.isFinite(scale))) return null;
+  if (fixedScale !== undefined) area = { x: area.x, y: area.y, w: bounds.w * scale, h: bounds.h * scale };
   const ox = area.x + (area.w - bounds.w * scale) / 2 - bounds.x * scale;
   const oy = area.y + (area.h - bounds.h * scale) / 2 - bounds.y * scale;
   const at = (x: number, y: number): Pt => [ox + x * scale, oy + y * scale];
@@ -299,12 +316,18 @@ export function planDiagram(
     span(p[2]!, p[3]!),
   ]);
   const taken = [...nodes.map(({ node, r }) => footprint(node.kind, r)), ...bands, ...segments];
-  if (mode === 'none') return { area, scale, at, mode, textMm, nodes, cables, blocks: [], taken };
+  if (mode === 'none') return { area, bounds, scale, at, mode, textMm, nodes, cables, blocks: [], taken };
 
   const obstacles = [...segments.filter((s) => s.w === 0), ...nodes.map((n) => n.r)];
-  const blocks = nodes.map(({ node, r }) =>
-    nodeBlock(node, r, mode === 'full' ? nodeLines(node, results) : [[{ text: node.id, bold: true }]], lineH),
-  );
+  const blocks = nodes.map(({ node, r }) => ({
+    ...nodeBlock(
+      node,
+      r,
+      mode === 'full' ? nodeLines(node, results) : [[{ text: node.id, bold: true }]],
+      lineH,
+    ),
+    of: node.id,
+  }));
   const around: Surroundings = {
     obstacles,
     across: segments.filter((s) => s.h === 0 && s.w > 0),
@@ -314,9 +337,10 @@ export function planDiagram(
   };
   cables.forEach(({ cable }, j) => {
     const words = mode === 'full' ? cableWords(cable, results) : [[[{ text: cable.id, bold: true }]]];
-    blocks.push(cableBlock(bands[j]!, words, around));
+    blocks.push({ ...cableBlock(bands[j]!, words, around), of: cable.id });
   });
   // Ids alone must each fit their place, or no text is drawn at all.
   if (mode === 'ids' && blocks.some((b) => width(b.lines[0]!.slice(0, 1)) > b.maxW)) mode = 'none';
-  return { area, scale, at, mode, textMm, nodes, cables, blocks: mode === 'none' ? [] : blocks, taken };
+  const shown = mode === 'none' ? [] : blocks;
+  return { area, bounds, scale, at, mode, textMm, nodes, cables, blocks: shown, taken };
 }

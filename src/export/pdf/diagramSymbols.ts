@@ -6,7 +6,7 @@
  */
 import type { jsPDF } from 'jspdf';
 import type { LoadKind, NodeElement } from '../../model/types.ts';
-import type { Pt } from './diagramLayout.ts';
+import type { Box, Pt } from './diagramLayout.ts';
 
 /** Straight lines through `pts` in order. */
 export function polyline(pdf: jsPDF, pts: readonly Pt[]): void {
@@ -129,4 +129,18 @@ export function drawNodeSymbol(pdf: jsPDF, n: NodeElement, [x, y]: Pt, w: number
   const kind = n.loadKind in MARKS ? n.loadKind : 'other';
   pdf.line(cx, y, cx, cy + (MARK_TOP[kind] ?? -0.8) * r);
   MARKS[kind](p);
+}
+
+/**
+ * The part of node `n`'s box (top-left `x`, `y`, size `w` × `h`) its symbol inks, lead included:
+ * a load's or supply's mark is narrower than its box, so text may come closer at the sides.
+ */
+export function symbolExtent(n: NodeElement, [x, y]: Pt, w: number, h: number): Box {
+  if (n.kind === 'board' || n.kind === 'junction') return { x, y, w, h };
+  const r = Math.min(w, h) / 2 - h * 0.12;
+  const [cx, cy] = [x + w / 2, y + h / 2];
+  // Every mark lies within 0.8 r of the centre, the supply's circle within r; the lead comes down from the top.
+  const half = (n.kind === 'supply' ? 1 : 0.8) * r;
+  const top = n.kind === 'supply' ? cy - half : y;
+  return { x: cx - half, y: top, w: 2 * half, h: cy + half - top };
 }

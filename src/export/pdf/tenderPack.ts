@@ -1,6 +1,7 @@
 /**
  * The tender pack: one A3 landscape PDF a reviewer can check without the program. Sheets, in
- * order: the single-line diagram; the summary (project, settings, data and standards used,
+ * order: the single-line diagram (a key plan and several sheets when the drawing is too large for
+ * legible labels on one); the summary (project, settings, data and standards used,
  * results in brief, methods and assumptions, the cautions in full); the cable, load and board
  * schedules; the findings; and the working behind every figure (formula, inputs with units and
  * sources, result), element by element. Every sheet carries a frame, a title block (project,
@@ -22,6 +23,8 @@ import { SCHEDULE_SHEETS, type ScheduleSheet } from '../schedules.ts';
 import { STATUS_LOOK } from '../statusLook.ts';
 import { valueText, workingRecords } from '../working.ts';
 import { drawDiagram } from './diagram.ts';
+import { drawKeyPlan, planDiagramSheets } from './diagramSheets.ts';
+import { drawDiagramWindow } from './diagramWindow.ts';
 
 /** The pack's font as base64 TrueType files (regular and bold). */
 export interface PackFonts {
@@ -449,6 +452,25 @@ function workingSheet(pdf: jsPDF, sheets: Sheets, doc: ProjectDocument, results:
   });
 }
 
+/**
+ * The single-line diagram: one sheet when its labels are legible fitted to it; otherwise a key
+ * plan and one sheet per window of the drawing (diagramSheets.ts).
+ */
+function diagramSheets(pdf: jsPDF, sheets: Sheets, doc: ProjectDocument, results: Results): void {
+  const plan = planDiagramSheets(pdf, doc, results, CONTENT, PACK_FONT);
+  if (!plan.layout || plan.windows.length === 0) {
+    sheets.start('Single-line diagram');
+    drawDiagram(pdf, doc, results, CONTENT, PACK_FONT);
+    return;
+  }
+  sheets.start('Single-line diagram: key plan');
+  drawKeyPlan(pdf, doc, results, CONTENT, PACK_FONT, plan.windows, plan.unplaced);
+  for (const w of plan.windows) {
+    sheets.start(`Single-line diagram: sheet ${w.name}`);
+    drawDiagramWindow(pdf, plan.layout, w, CONTENT, PACK_FONT, plan.windows);
+  }
+}
+
 /** Registers the pack's font on a jsPDF document. */
 export function registerPackFont(pdf: jsPDF, fonts: PackFonts): void {
   pdf.addFileToVFS(`${PACK_FONT}.ttf`, fonts.regular);
@@ -474,8 +496,7 @@ export function buildTenderPack(
     creator: 'Dropline',
   });
   const sheets = new Sheets(pdf);
-  sheets.start('Single-line diagram');
-  drawDiagram(pdf, doc, results, CONTENT, PACK_FONT);
+  diagramSheets(pdf, sheets, doc, results);
   sheets.start('Summary, data and cautions');
   summarySheet(pdf, doc, results);
   for (const sheet of ['cables', 'loads', 'boards'] as const) scheduleSheet(pdf, sheets, doc, results, sheet);

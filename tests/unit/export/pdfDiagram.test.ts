@@ -11,120 +11,23 @@
  *   throwing; a box too small for legible labels leaves them out, printing ids alone where they
  *   fit and no text at all where they do not.
  */
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { jsPDF, type TextOptionsLight } from 'jspdf';
-import { afterAll, describe, expect, test } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { describe, expect, test } from 'vitest';
 import { drawDiagram, type Box } from '../../../src/export/pdf/diagram.ts';
 import { STATUS_LOOK } from '../../../src/export/statusLook.ts';
 import { NODE_SIZE } from '../../../src/model/layout.ts';
 import { parseDocument } from '../../../src/model/parseDocument.ts';
 import type { Position, ProjectDocument } from '../../../src/model/types.ts';
 import { solve } from '../../../src/solver/solve.ts';
+import { FONT, PT_MM, inside, newPdf, pageText, record } from './pdfRecord.ts';
 
-const FONT = 'DejaVu';
-const FONT_FILES = {
-  normal: readFileSync('public/fonts/DejaVuSansCondensed.ttf').toString('base64'),
-  bold: readFileSync('public/fonts/DejaVuSansCondensed-Bold.ttf').toString('base64'),
-};
 /** The sheet content area of an A3 landscape page with a frame and title block. */
 const BOX: Box = { x: 14, y: 22, w: 392, h: 225 };
-const PT_MM = 25.4 / 72;
-const dirs: string[] = [];
-
-afterAll(() => {
-  for (const d of dirs) rmSync(d, { recursive: true, force: true });
-});
 
 function demo(): ProjectDocument {
   const parsed = parseDocument(readFileSync('public/demo-project.json', 'utf8'));
   if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
   return parsed.doc;
-}
-
-function newPdf(): jsPDF {
-  const pdf = new jsPDF({ orientation: 'landscape', unit: 'mm', format: 'a3' });
-  for (const style of ['normal', 'bold'] as const) {
-    pdf.addFileToVFS(`${FONT}-${style}.ttf`, FONT_FILES[style]);
-    pdf.addFont(`${FONT}-${style}.ttf`, FONT, style);
-  }
-  return pdf;
-}
-
-interface Mark {
-  kind: 'line' | 'rect' | 'circle' | 'text';
-  box: Box;
-  /** For lines: the end points and the stroke in force. */
-  ends?: [number, number, number, number];
-  colour?: string;
-  width?: number;
-  dash?: number[];
-  text?: string;
-}
-
-/** Wraps the drawing primitives of `pdf` so every call is recorded with its extent on the page. */
-function record(pdf: jsPDF): Mark[] {
-  const marks: Mark[] = [];
-  let dash: number[] = [];
-  const setDash = pdf.setLineDashPattern.bind(pdf);
-  pdf.setLineDashPattern = (d: number[], phase: number) => {
-    dash = [...d];
-    return setDash(d, phase);
-  };
-  const line = pdf.line.bind(pdf);
-  pdf.line = (x1: number, y1: number, x2: number, y2: number, style?: string | null) => {
-    marks.push({
-      kind: 'line',
-      box: { x: Math.min(x1, x2), y: Math.min(y1, y2), w: Math.abs(x2 - x1), h: Math.abs(y2 - y1) },
-      ends: [x1, y1, x2, y2],
-      colour: pdf.getDrawColor(),
-      width: pdf.getLineWidth(),
-      dash,
-    });
-    return line(x1, y1, x2, y2, style);
-  };
-  const rect = pdf.rect.bind(pdf);
-  pdf.rect = (x: number, y: number, w: number, h: number, style?: string | null) => {
-    marks.push({ kind: 'rect', box: { x, y, w, h } });
-    return rect(x, y, w, h, style);
-  };
-  const circle = pdf.circle.bind(pdf);
-  pdf.circle = (x: number, y: number, r: number, style?: string | null) => {
-    marks.push({ kind: 'circle', box: { x: x - r, y: y - r, w: 2 * r, h: 2 * r } });
-    return circle(x, y, r, style);
-  };
-  const text = pdf.text.bind(pdf) as (t: string, x: number, y: number, o?: TextOptionsLight) => jsPDF;
-  (pdf as { text: unknown }).text = (t: string, x: number, y: number, o?: TextOptionsLight) => {
-    const h = pdf.getFontSize() * PT_MM;
-    const w = pdf.getTextWidth(t);
-    const top = o?.baseline === 'top' ? y : o?.baseline === 'middle' ? y - h / 2 : y - 0.8 * h;
-    const left = o?.align === 'center' ? x - w / 2 : o?.align === 'right' ? x - w : x;
-    marks.push({ kind: 'text', box: { x: left, y: top, w, h }, text: t });
-    return text(t, x, y, o);
-  };
-  return marks;
-}
-
-function inside(b: Box, box: Box, tol: number): boolean {
-  return (
-    b.x >= box.x - tol &&
-    b.y >= box.y - tol &&
-    b.x + b.w <= box.x + box.w + tol &&
-    b.y + b.h <= box.y + box.h + tol
-  );
-}
-
-function pageText(pdf: jsPDF): string {
-  const dir = mkdtempSync(join(tmpdir(), 'dropline-diagram-'));
-  dirs.push(dir);
-  const file = join(dir, 'diagram.pdf');
-  writeFileSync(file, Buffer.from(pdf.output('arraybuffer')));
-  return execFileSync('pdftotext', ['-layout', file, '-'], {
-    encoding: 'utf8',
-    stdio: ['ignore', 'pipe', 'ignore'],
-  });
 }
 
 function hex(colour: string): [number, number, number] {
