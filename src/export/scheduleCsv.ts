@@ -68,11 +68,4 @@ export function scheduleCsv(
   return BOM + lines.join('\r\n') + '\r\n';
 }
 
-/** A file name for a schedule of this project, e.g. "PBJ-E-001-cable-schedule.csv". */
-export function scheduleFileName(doc: ProjectDocument, title: string): string {
-  const base = (doc.details.reference || doc.details.title || 'project')
-    .replace(/[^\w.-]+/g, '-')
-    .replace(/^-+|-+$/g, '');
-  const what = title.toLowerCase().replace(/[^\w]+/g, '-');
-  return `${base || 'project'}-${what}.csv`;
-}
+export { scheduleFileName } from './fileNames.ts';

@@ -26,6 +26,7 @@ import { findingsSheet, scheduleSheet, workingSheet } from './packTables.ts';
 
 export { PACK_FONT } from './packPage.ts';
 export { PACK_METHODS } from './packSummary.ts';
+export { tenderPackFileName } from '../fileNames.ts';
 
 /** The pack's font as base64 TrueType files (regular and bold). */
 export interface PackFonts {
@@ -38,15 +39,6 @@ export interface PackOptions {
   working?: boolean;
   /** When the pack was made, printed in the title block; default now. */
   madeAt?: Date;
-}
-
-/** "PBJ-E-001-tender-pack.pdf" from the project's reference (or title). */
-export function tenderPackFileName(doc: ProjectDocument): string {
-  const base = (doc.details.reference || doc.details.title || 'project')
-    .replace(/[^\w.-]+/g, '-')
-    .replace(/^-+|-+$/g, '');
-  const rev = doc.details.revision ? `-rev-${doc.details.revision.replace(/[^\w.-]+/g, '-')}` : '';
-  return `${base || 'project'}${rev}-tender-pack.pdf`;
 }
 
 /**

@@ -1,47 +1,59 @@
 /**
- * Export → tender pack PDF. jsPDF and the pack's font are fetched when the user first asks, so the
- * editor starts without them (about 160 kB of script and 1.4 MB of font).
+ * Export → tender pack PDF. The pack is made in a worker (packWorker.ts), so the page stays
+ * responsive; jsPDF and the pack's font are loaded there when the user first asks, so the editor
+ * starts without them. Where a browser offers no module worker, it is made on the page instead.
  */
 import { useEditor } from '../../store/editorStore.ts';
-import type { PackFonts } from '../../export/pdf/tenderPack.ts';
+import { tenderPackFileName } from '../../export/fileNames.ts';
 import { download } from './fileActions.ts';
+import { fetchPackFonts } from './packFonts.ts';
+import type { PackReply, PackRequest } from './packWorker.ts';
 
-let fonts: Promise<PackFonts> | undefined;
-
-async function fontFile(name: string): Promise<string> {
-  const response = await fetch(`${import.meta.env.BASE_URL}fonts/${name}`);
-  if (!response.ok) throw new Error(`the font ${name} could not be fetched (${response.status})`);
-  const bytes = new Uint8Array(await response.arrayBuffer());
-  let binary = '';
-  for (let k = 0; k < bytes.length; k += 0x8000)
-    binary += String.fromCharCode(...bytes.subarray(k, k + 0x8000));
-  return btoa(binary);
+function inWorker(request: PackRequest): Promise<Uint8Array<ArrayBuffer>> {
+  return new Promise((resolve, reject) => {
+    const worker = new Worker(new URL('./packWorker.ts', import.meta.url), { type: 'module' });
+    worker.onmessage = (e: MessageEvent<PackReply>) => {
+      worker.terminate();
+      if (e.data.ok) resolve(e.data.bytes);
+      else reject(new Error(e.data.error));
+    };
+    worker.onerror = (e) => {
+      worker.terminate();
+      reject(new Error(e.message || 'the worker making the pack stopped'));
+    };
+    worker.postMessage(request);
+  });
 }
 
-function packFonts(): Promise<PackFonts> {
-  fonts ??= Promise.all([fontFile('DejaVuSansCondensed.ttf'), fontFile('DejaVuSansCondensed-Bold.ttf')]).then(
-    ([regular, bold]) => ({ regular, bold }),
-  );
-  // A failed fetch is tried again next time.
-  fonts.catch(() => (fonts = undefined));
-  return fonts;
+async function onPage(request: PackRequest): Promise<Uint8Array<ArrayBuffer>> {
+  const [pack, fonts] = await Promise.all([
+    import('../../export/pdf/tenderPack.ts'),
+    fetchPackFonts(request.base),
+  ]);
+  const { results } = useEditor.getState();
+  return pack.tenderPackBytes(request.doc, results, fonts, {
+    working: request.working,
+  }) as Uint8Array<ArrayBuffer>;
 }
 
 /** Builds the tender pack of the open project and downloads it (`working: false` leaves the working sheets out). */
 export async function exportTenderPack(options: { working?: boolean } = {}): Promise<void> {
   const s = useEditor.getState();
   s.notify('Making the tender pack…', 'info');
+  // The project as it is at the click; later edits do not change this pack.
+  const request: PackRequest = {
+    doc: s.doc,
+    working: options.working !== false,
+    base: import.meta.env.BASE_URL,
+  };
   try {
-    const [pack, f] = await Promise.all([import('../../export/pdf/tenderPack.ts'), packFonts()]);
-    // The project as it is now, solved as the canvas shows it.
-    const { doc, results } = useEditor.getState();
-    const bytes = pack.tenderPackBytes(doc, results, f, { working: options.working !== false });
-    const name = pack.tenderPackFileName(doc);
-    download(bytes as Uint8Array<ArrayBuffer>, name, 'application/pdf');
+    const bytes = typeof Worker === 'function' ? await inWorker(request) : await onPage(request);
+    const name = tenderPackFileName(request.doc);
+    download(bytes, name, 'application/pdf');
     useEditor
       .getState()
       .notify(
-        `Downloaded ${name}: diagram, summary and cautions, schedules, findings${options.working === false ? '' : ' and working'}.`,
+        `Downloaded ${name}: diagram, summary and cautions, schedules, findings${request.working ? ' and working' : ''}.`,
       );
   } catch (e) {
     useEditor
