@@ -24,6 +24,15 @@ function countStatuses(results: Results): Record<Status | 'none', number> {
   return out;
 }
 
+/** A block's heading; returns the y of the first line under it. */
+function subheading(pdf: jsPDF, x: number, y: number, heading: string): number {
+  pdf.setFont(PACK_FONT, 'bold');
+  pdf.setFontSize(10.5);
+  pdf.setTextColor(...INK);
+  pdf.text(heading, x, y);
+  return y + 5.5;
+}
+
 /** Label/value lines under a heading; returns the y below them. */
 function block(
   pdf: jsPDF,
@@ -33,11 +42,7 @@ function block(
   heading: string,
   lines: readonly (readonly [string, string])[],
 ): number {
-  pdf.setFont(PACK_FONT, 'bold');
-  pdf.setFontSize(10.5);
-  pdf.setTextColor(...INK);
-  pdf.text(heading, x, y);
-  y += 5.5;
+  y = subheading(pdf, x, y, heading);
   for (const [label, value] of lines) {
     pdf.setFont(PACK_FONT, 'normal');
     pdf.setFontSize(8.5);
@@ -60,11 +65,7 @@ function paragraphs(
   heading: string,
   items: readonly string[],
 ): number {
-  pdf.setFont(PACK_FONT, 'bold');
-  pdf.setFontSize(10.5);
-  pdf.setTextColor(...INK);
-  pdf.text(heading, x, y);
-  y += 5.5;
+  y = subheading(pdf, x, y, heading);
   pdf.setFont(PACK_FONT, 'normal');
   pdf.setFontSize(8.5);
   for (const item of items) {
