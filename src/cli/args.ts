@@ -15,10 +15,13 @@ export type CliArgs =
       schedule: ScheduleSheet | null;
       /** Where to write the tender pack PDF, or null. */
       pdfFile: string | null;
+      /** Where to write the single-line diagram as SVG, or null. */
+      svgFile: string | null;
     }
   | { command: 'error'; message: string };
 
-export const USAGE = `usage: dropline check FILE [--json | --working ID | --schedule SHEET] [--pdf OUT.pdf] [--data TABLE]
+export const USAGE = `usage: dropline check FILE [--json | --working ID | --schedule SHEET] [--pdf OUT.pdf] [--svg OUT.svg]
+                      [--data TABLE]
 
 Checks a Dropline project file: solves it and prints, per load, its path, cumulative drop, limit
 and status; per cable, Ib, drop in V and % and the cumulative %; every finding; the cautions; the
@@ -34,6 +37,9 @@ options:
   --pdf OUT.pdf  also write the tender pack to OUT.pdf (A3 landscape): the single-line diagram, a
                  summary with the data, standards and cautions used, the schedules, the findings and
                  the working behind every figure; the report is printed as usual
+  --svg OUT.svg  also write the single-line diagram to OUT.svg, drawn as on the tender pack's diagram
+                 sheet (a large one whole at a legible scale) under a line with the project, the data
+                 used and the caution; the report is printed as usual
   --data TABLE   use your own conductor data set (CSV or JSON, shape: docs/catalogue-data.md) instead
                  of the built-in one; the report and every working record name it
   --help         show this text
@@ -41,8 +47,8 @@ options:
 exit status:
   0  every load is within its limit and there is no error finding
   1  a load is over its limit, or a check failed (any error finding)
-  2  the file could not be read or is not a valid project file, the --pdf file could not be
-     written, or the command line is wrong
+  2  the file could not be read or is not a valid project file, the --pdf or --svg file could not
+     be written, or the command line is wrong
   3  internal error while solving (please report it with the file)`;
 
 /**
@@ -62,6 +68,7 @@ export function parseArgs(argv: readonly string[]): CliArgs {
   let dataFile: string | null = null;
   let schedule: ScheduleSheet | null = null;
   let pdfFile: string | null = null;
+  let svgFile: string | null = null;
   for (let i = 0; i < rest.length; i++) {
     const a = rest[i]!;
     if (a === '--json') json = true;
@@ -84,6 +91,11 @@ export function parseArgs(argv: readonly string[]): CliArgs {
       if (out === undefined || out === '' || out.startsWith('--'))
         return { command: 'error', message: '--pdf needs a file to write, e.g. --pdf site-tender-pack.pdf' };
       pdfFile = out;
+    } else if (a === '--svg' || a.startsWith('--svg=')) {
+      const out = a === '--svg' ? rest[++i] : a.slice('--svg='.length);
+      if (out === undefined || out === '' || out.startsWith('--'))
+        return { command: 'error', message: '--svg needs a file to write, e.g. --svg site-single-line.svg' };
+      svgFile = out;
     } else if (a === '--schedule' || a.startsWith('--schedule=')) {
       const sheet = a === '--schedule' ? rest[++i] : a.slice('--schedule='.length);
       if (!SHEET_NAMES.includes(sheet as ScheduleSheet))
@@ -100,5 +112,5 @@ export function parseArgs(argv: readonly string[]): CliArgs {
     return { command: 'error', message: 'name the project file to check, e.g. dropline check site.json' };
   if ([json, workingId !== null, schedule !== null].filter(Boolean).length > 1)
     return { command: 'error', message: 'choose one of --json, --working and --schedule' };
-  return { command: 'check', file, json, workingId, dataFile, schedule, pdfFile };
+  return { command: 'check', file, json, workingId, dataFile, schedule, pdfFile, svgFile };
 }

@@ -18,6 +18,7 @@ import { formatElementWorking, similarIds } from './working.ts';
 import { SCHEDULE_SHEETS } from '../export/schedules.ts';
 import { scheduleCsv } from '../export/scheduleCsv.ts';
 import { tenderPackBytes, type PackFonts } from '../export/pdf/tenderPack.ts';
+import { diagramSvg } from '../export/svg/diagramSvg.ts';
 
 export interface CliIo {
   stdout(text: string): void;
@@ -83,34 +84,56 @@ function readError(file: string, e: unknown): string {
   return `dropline: cannot read ${file}: ${why}\n`;
 }
 
-/** Writes the tender pack; false (with the reason on stderr) when it could not be written. */
-function writePack(io: CliIo, path: string, doc: ProjectDocument, results: Results): boolean {
+/** Why a file could not be written, in plain words. */
+function writeError(e: unknown): string {
+  const code = (e as { code?: string }).code;
+  return code === 'ENOENT'
+    ? 'its folder does not exist'
+    : code === 'EACCES' || code === 'EPERM'
+      ? 'permission denied'
+      : code === 'EISDIR'
+        ? 'it is a directory'
+        : e instanceof Error
+          ? e.message
+          : String(e);
+}
+
+/** One file an option asks for: what it is, the option, and how to make its bytes. */
+interface Output {
+  what: string;
+  option: string;
+  make: () => Uint8Array;
+}
+
+/** Makes and writes `out` to `path`; false (with the reason on stderr) when it could not be. */
+function writeOutput(io: CliIo, path: string, out: Output): boolean {
   let bytes: Uint8Array;
   try {
-    bytes = tenderPackBytes(doc, results, io.packFonts());
+    bytes = out.make();
   } catch (e) {
-    io.stderr(`dropline: could not make the tender pack: ${e instanceof Error ? e.message : String(e)}\n`);
+    io.stderr(`dropline: could not make the ${out.what}: ${e instanceof Error ? e.message : String(e)}\n`);
     return false;
   }
   try {
     io.writeBytes(path, bytes);
   } catch (e) {
-    const code = (e as { code?: string }).code;
-    const why =
-      code === 'ENOENT'
-        ? 'its folder does not exist'
-        : code === 'EACCES' || code === 'EPERM'
-          ? 'permission denied'
-          : code === 'EISDIR'
-            ? 'it is a directory'
-            : e instanceof Error
-              ? e.message
-              : String(e);
-    io.stderr(`dropline: cannot write ${path}: ${why}; choose another --pdf path\n`);
+    io.stderr(`dropline: cannot write ${path}: ${writeError(e)}; choose another ${out.option} path\n`);
     return false;
   }
-  io.stderr(`dropline: tender pack written to ${path} (${Math.round(bytes.length / 1024)} kB)\n`);
+  io.stderr(`dropline: ${out.what} written to ${path} (${Math.round(bytes.length / 1024)} kB)\n`);
   return true;
+}
+
+/** Writes the tender pack; false (with the reason on stderr) when it could not be written. */
+function writePack(io: CliIo, path: string, doc: ProjectDocument, results: Results): boolean {
+  const make = () => tenderPackBytes(doc, results, io.packFonts());
+  return writeOutput(io, path, { what: 'tender pack', option: '--pdf', make });
+}
+
+/** Writes the single-line diagram as SVG; false (with the reason on stderr) when it could not be written. */
+function writeDrawing(io: CliIo, path: string, doc: ProjectDocument, results: Results): boolean {
+  const make = () => new TextEncoder().encode(diagramSvg(doc, results, io.packFonts()));
+  return writeOutput(io, path, { what: 'single-line diagram', option: '--svg', make });
 }
 
 /**
@@ -181,6 +204,7 @@ export function runCli(
   }
   const summary = summarise(results);
   if (args.pdfFile !== null && !writePack(io, args.pdfFile, parsed.doc, results)) return 2;
+  if (args.svgFile !== null && !writeDrawing(io, args.svgFile, parsed.doc, results)) return 2;
 
   if (args.workingId !== null) {
     const text = formatElementWorking(parsed.doc, results, args.workingId);

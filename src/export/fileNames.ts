@@ -16,8 +16,17 @@ export function scheduleFileName(doc: ProjectDocument, title: string): string {
   return `${projectBase(doc)}-${what}.csv`;
 }
 
+/** "-rev-B" from the project's revision, or nothing when it has none. */
+function revisionPart(doc: ProjectDocument): string {
+  return doc.details.revision ? `-rev-${doc.details.revision.replace(/[^\w.-]+/g, '-')}` : '';
+}
+
 /** "PBJ-E-001-rev-B-tender-pack.pdf" from the project's reference (or title) and revision. */
 export function tenderPackFileName(doc: ProjectDocument): string {
-  const rev = doc.details.revision ? `-rev-${doc.details.revision.replace(/[^\w.-]+/g, '-')}` : '';
-  return `${projectBase(doc)}${rev}-tender-pack.pdf`;
+  return `${projectBase(doc)}${revisionPart(doc)}-tender-pack.pdf`;
+}
+
+/** "PBJ-E-001-rev-B-single-line.svg": the drawing's file name, from the reference (or title) and revision. */
+export function drawingFileName(doc: ProjectDocument): string {
+  return `${projectBase(doc)}${revisionPart(doc)}-single-line.svg`;
 }

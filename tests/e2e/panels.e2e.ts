@@ -152,6 +152,32 @@ test('Tender pack PDF downloads the pack of the open project, as a PDF reader se
   expect(s.errors).toEqual([]);
 });
 
+test('the pack dialog also downloads the drawing as SVG, with every element and the caution', async () => {
+  const doc = demo();
+  const ui = new Panels(s.page);
+  await ui.start();
+  await s.page.getByTestId('export-pack').click();
+  const [file] = await Promise.all([
+    s.page.waitForEvent('download'),
+    s.page.getByTestId('svg-download').click(),
+  ]);
+  expect(file.suggestedFilename()).toBe(
+    `${doc.details.reference}-rev-${doc.details.revision}-single-line.svg`,
+  );
+  const svg = readFileSync((await file.path())!, 'utf8');
+  // The browser's own XML parser reads it back.
+  const texts = await s.page.evaluate((text) => {
+    const parsed = new DOMParser().parseFromString(text, 'image/svg+xml');
+    if (parsed.querySelector('parsererror')) return null;
+    return [...parsed.querySelectorAll('text')].map((t) => t.textContent ?? '');
+  }, svg);
+  expect(texts).not.toBeNull();
+  for (const id of [...doc.nodes.map((n) => n.id), ...doc.cables.map((c) => c.id)])
+    expect(texts).toContain(id);
+  expect(texts!.join(' ')).toContain('Design aid only');
+  expect(s.errors).toEqual([]);
+});
+
 test('a bad length is refused in place; a good one changes the cumulative drop to the engine’s value', async () => {
   const doc = demo();
   const results = solve(doc);

@@ -1,25 +1,27 @@
 /**
  * The single-line diagram on a PDF page, drawn from the document with jsPDF primitives: cables on
  * the editor's step route, plain symbols (diagramSymbols.ts) and labels sized from the drawing's
- * scale (diagramLayout.ts), plus a status key in a free corner. A drawing too large for legible
+ * scale (diagramLayout.ts), plus a status key in a free corner. It draws through a Pen (pen.ts),
+ * so the SVG export (export/svg) draws it with the same code. A drawing too large for legible
  * labels on one sheet is split over several (diagramSheets.ts).
  *
  * Status shows as colour, dash pattern and line width together, and as a glyph in the labels, so
  * it still reads in greyscale print.
  */
-import type { jsPDF } from 'jspdf';
 import type { ProjectDocument } from '../../model/types.ts';
 import type { Results } from '../../solver/results.ts';
 import { PT_MM, overlaps, planDiagram, type Box, type Plan, type Pt } from './diagramLayout.ts';
 import { drawKey, drawPlan, keepState, keySize, measurer, strokeScale, type KeySize } from './diagramDraw.ts';
+import type { Pen } from './pen.ts';
 
 export type { Box } from './diagramLayout.ts';
 
 /**
- * Draws the single-line diagram of `doc`, scaled to fit `box` (aspect kept, centred). `font` is a
- * jsPDF font family already registered with styles 'normal' and 'bold' (a Unicode TTF, so Ω, Σ,
- * ², Δ print). Returns the scale used (mm per canvas unit) and whether labels were drawn: false
- * when they would print under 4 pt (then only ids, or no text, go with the lines and symbols).
+ * Draws the single-line diagram of `doc` with `pdf` (a jsPDF document or another Pen), scaled to
+ * fit `box` (aspect kept, centred). `font` is a jsPDF font family already registered with styles
+ * 'normal' and 'bold' (a Unicode TTF, so Ω, Σ, ², Δ print). Returns the scale used (mm per canvas
+ * unit) and whether labels were drawn: false when they would print under 4 pt (then only ids, or
+ * no text, go with the lines and symbols).
  * Draws nothing and returns scale 0 when no node has a position; cables to a missing node are left
  * out. The caller's font, colours and line width are put back afterwards, and lines left solid.
  *
@@ -28,7 +30,7 @@ export type { Box } from './diagramLayout.ts';
  *   // scale ≈ 0.1 mm per canvas unit; labels true for a 35-element project on A3
  */
 export function drawDiagram(
-  pdf: jsPDF,
+  pdf: Pen,
   doc: ProjectDocument,
   results: Results,
   box: Box,
@@ -58,7 +60,7 @@ export interface Fitted {
  * `plan.mode` is 'full' when the labels print at 4 pt or more.
  */
 export function fitDiagram(
-  pdf: jsPDF,
+  pdf: Pen,
   doc: ProjectDocument,
   results: Results,
   box: Box,

@@ -5,11 +5,11 @@
  * Status shows as colour, dash pattern and line width together, and as a glyph in the labels, so
  * it still reads in greyscale print.
  */
-import type { jsPDF } from 'jspdf';
 import type { Status } from '../../solver/results.ts';
 import { STATUS_LOOK, statusLook } from '../statusLook.ts';
 import { LINE, PT_MM, type Block, type Measure, type Plan, type Pt, type Seg } from './diagramLayout.ts';
 import { drawNodeSymbol, polyline } from './diagramSymbols.ts';
+import type { Pen } from './pen.ts';
 
 type Rgb = [number, number, number];
 
@@ -24,7 +24,7 @@ const MAX_STROKE_SCALE = 0.25;
 const KEY_ROWS = ['within', 'close', 'over', null] as const;
 
 /** Notes the caller's font, colours and line style; the returned function puts them back. */
-export function keepState(pdf: jsPDF): () => void {
+export function keepState(pdf: Pen): () => void {
   const font = pdf.getFont();
   const size = pdf.getFontSize();
   const text = pdf.getTextColor();
@@ -54,7 +54,7 @@ export function strokeScale(scale: number): number {
 }
 
 /** The width of each run of text at a text height of `mm` millimetres. */
-export function segWidths(pdf: jsPDF, font: string, segs: Seg[], mm: number): number[] {
+export function segWidths(pdf: Pen, font: string, segs: Seg[], mm: number): number[] {
   pdf.setFontSize(mm / PT_MM);
   return segs.map((s) => {
     pdf.setFont(font, s.bold ? 'bold' : 'normal');
@@ -63,12 +63,12 @@ export function segWidths(pdf: jsPDF, font: string, segs: Seg[], mm: number): nu
 }
 
 /** The text measure the layout takes (diagramLayout.ts), from jsPDF's font metrics. */
-export function measurer(pdf: jsPDF, font: string): Measure {
+export function measurer(pdf: Pen, font: string): Measure {
   return (segs, mm) => segWidths(pdf, font, segs, mm).reduce((a, b) => a + b, 0);
 }
 
 /** Colour, width and dash of a status (`k` mm per px), so a cable's status never rests on colour alone. */
-function applyStatus(pdf: jsPDF, status: Status | null, k: number): void {
+function applyStatus(pdf: Pen, status: Status | null, k: number): void {
   const look = statusLook(status);
   pdf.setDrawColor(...rgb(look.colour));
   pdf.setLineWidth(look.strokeWidth * k);
@@ -84,7 +84,7 @@ function applyStatus(pdf: jsPDF, status: Status | null, k: number): void {
 }
 
 /** The line with its `cut` part shortened (ending in …) until it fits `maxMm`; ids and figures are never cut. */
-function fitLine(pdf: jsPDF, font: string, line: Seg[], mm: number, maxMm: number): Seg[] {
+function fitLine(pdf: Pen, font: string, line: Seg[], mm: number, maxMm: number): Seg[] {
   const widths = segWidths(pdf, font, line, mm);
   const total = widths.reduce((a, b) => a + b, 0);
   const k = line.findIndex((s) => s.cut);
@@ -109,7 +109,7 @@ export interface TextRun {
 }
 
 /** Where each run of a label block prints, kept inside the plan's area. */
-export function placeBlock(pdf: jsPDF, font: string, plan: Plan, b: Block): TextRun[] {
+export function placeBlock(pdf: Pen, font: string, plan: Plan, b: Block): TextRun[] {
   const mm = plan.textMm;
   const maxMm = b.maxW * plan.scale;
   const [left, top] = plan.at(b.x, b.top);
@@ -134,14 +134,7 @@ export function placeBlock(pdf: jsPDF, font: string, plan: Plan, b: Block): Text
 }
 
 /** Prints `runs` at a text height of `mm` millimetres, moved by (`dx`, `dy`). */
-export function drawRuns(
-  pdf: jsPDF,
-  font: string,
-  mm: number,
-  runs: readonly TextRun[],
-  dx = 0,
-  dy = 0,
-): void {
+export function drawRuns(pdf: Pen, font: string, mm: number, runs: readonly TextRun[], dx = 0, dy = 0): void {
   pdf.setFontSize(mm / PT_MM);
   for (const r of runs) {
     pdf.setFont(font, r.bold ? 'bold' : 'normal');
@@ -151,7 +144,7 @@ export function drawRuns(
 }
 
 /** Draws `cables` along their routes, the worse status on top. */
-export function drawCables(pdf: jsPDF, plan: Plan, cables: Plan['cables']): void {
+export function drawCables(pdf: Pen, plan: Plan, cables: Plan['cables']): void {
   const k = strokeScale(plan.scale);
   // Cables leaving a node share their first runs. The worse status goes on top (its line is also
   // the wider), so a shared run shows the worst it carries, as a cable shows the worst load it feeds.
@@ -173,7 +166,7 @@ export function drawCables(pdf: jsPDF, plan: Plan, cables: Plan['cables']): void
 }
 
 /** Draws the symbols of `nodes` in ink. */
-export function drawSymbols(pdf: jsPDF, plan: Plan, nodes: Plan['nodes']): void {
+export function drawSymbols(pdf: Pen, plan: Plan, nodes: Plan['nodes']): void {
   pdf.setLineDashPattern([], 0);
   pdf.setDrawColor(...rgb(INK));
   pdf.setFillColor(...rgb(INK));
@@ -183,7 +176,7 @@ export function drawSymbols(pdf: jsPDF, plan: Plan, nodes: Plan['nodes']): void 
 }
 
 /** Draws the whole plan: cables, symbols, then labels. */
-export function drawPlan(pdf: jsPDF, font: string, plan: Plan): void {
+export function drawPlan(pdf: Pen, font: string, plan: Plan): void {
   drawCables(pdf, plan, plan.cables);
   drawSymbols(pdf, plan, plan.nodes);
   for (const b of plan.blocks) drawRuns(pdf, font, plan.textMm, placeBlock(pdf, font, plan, b));
@@ -198,7 +191,7 @@ export interface KeySize {
 }
 
 /** The size of the framed status key at `pt` points. */
-export function keySize(pdf: jsPDF, font: string, pt: number): KeySize {
+export function keySize(pdf: Pen, font: string, pt: number): KeySize {
   const mm = pt * PT_MM;
   pdf.setFont(font, 'normal');
   pdf.setFontSize(pt);
@@ -209,7 +202,7 @@ export function keySize(pdf: jsPDF, font: string, pt: number): KeySize {
 }
 
 /** The status key: each status's line style, glyph and word, then "no result". */
-export function drawKey(pdf: jsPDF, font: string, pt: number, [x, y]: Pt, key: KeySize, k: number): void {
+export function drawKey(pdf: Pen, font: string, pt: number, [x, y]: Pt, key: KeySize, k: number): void {
   const mm = pt * PT_MM;
   pdf.setLineDashPattern([], 0);
   pdf.setDrawColor(...rgb(KEY_FRAME));
@@ -232,7 +225,7 @@ export function drawKey(pdf: jsPDF, font: string, pt: number, [x, y]: Pt, key: K
  * The status key in one row from `x` along the middle line `cy` (millimetres): each status's line
  * style, glyph and word. Returns the width it took.
  */
-export function drawKeyRow(pdf: jsPDF, font: string, pt: number, x: number, cy: number, k: number): number {
+export function drawKeyRow(pdf: Pen, font: string, pt: number, x: number, cy: number, k: number): number {
   const mm = pt * PT_MM;
   const sample = mm * 5;
   let at = x;

@@ -1,26 +1,26 @@
 /**
  * Plain vector symbols for the PDF single-line diagram, in the spirit of IEC 60617: a source as a
  * circle with a sine, a board as a rectangle with a busbar, a junction as a dot, and a load as a
- * circle or square with a mark for its kind. Drawn with jsPDF lines, circles and rectangles only,
+ * circle or square with a mark for its kind. Drawn with a Pen's lines, circles and rectangles only,
  * in the current stroke colour and width, and always inside the node's box.
  */
-import type { jsPDF } from 'jspdf';
 import type { LoadKind, NodeElement } from '../../model/types.ts';
 import type { Box, Pt } from './diagramLayout.ts';
+import type { Pen } from './pen.ts';
 
 /** Straight lines through `pts` in order. */
-export function polyline(pdf: jsPDF, pts: readonly Pt[]): void {
+export function polyline(pdf: Pen, pts: readonly Pt[]): void {
   for (let k = 1; k < pts.length; k++) pdf.line(pts[k - 1]![0], pts[k - 1]![1], pts[k]![0], pts[k]![1]);
 }
 
 /** Draws in units of a symbol's radius, from its centre (v grows downwards, as on the page). */
-interface Pen {
+interface UnitPen {
   circle(u: number, v: number, r: number): void;
   rect(u: number, v: number, w: number, h: number): void;
   poly(...pts: Pt[]): void;
 }
 
-function pen(pdf: jsPDF, cx: number, cy: number, s: number): Pen {
+function unitPen(pdf: Pen, cx: number, cy: number, s: number): UnitPen {
   const at = ([u, v]: Pt): Pt => [cx + u * s, cy + v * s];
   return {
     circle: (u, v, r) => void pdf.circle(cx + u * s, cy + v * s, r * s, 'S'),
@@ -44,7 +44,7 @@ const MARK_TOP: Partial<Record<LoadKind, number>> = {
   other: -0.7,
 };
 
-const MARKS: Record<LoadKind, (p: Pen) => void> = {
+const MARKS: Record<LoadKind, (p: UnitPen) => void> = {
   lighting: (p) => {
     p.circle(0, 0, 0.8);
     p.poly([-0.57, -0.57], [0.57, 0.57]);
@@ -106,7 +106,7 @@ const MARKS: Record<LoadKind, (p: Pen) => void> = {
  * @example
  *   drawNodeSymbol(pdf, load, [40, 60], 10, 8.8); // a lamp: circle with a cross, lead to the top
  */
-export function drawNodeSymbol(pdf: jsPDF, n: NodeElement, [x, y]: Pt, w: number, h: number): void {
+export function drawNodeSymbol(pdf: Pen, n: NodeElement, [x, y]: Pt, w: number, h: number): void {
   const cx = x + w / 2;
   const cy = y + h / 2;
   if (n.kind === 'junction') {
@@ -120,7 +120,7 @@ export function drawNodeSymbol(pdf: jsPDF, n: NodeElement, [x, y]: Pt, w: number
     return;
   }
   const r = Math.min(w, h) / 2 - h * 0.12;
-  const p = pen(pdf, cx, cy, r);
+  const p = unitPen(pdf, cx, cy, r);
   if (n.kind === 'supply') {
     p.circle(0, 0, 1);
     p.poly(...curve(-0.6, 0.6, 8, sine(0, 0.35)));

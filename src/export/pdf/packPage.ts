@@ -9,6 +9,20 @@ import type { Results } from '../../solver/results.ts';
 /** The family name the pack registers its font under. */
 export const PACK_FONT = 'DejaVuSansCondensed';
 
+/** The pack's font as base64 TrueType files (regular and bold). */
+export interface PackFonts {
+  regular: string;
+  bold: string;
+}
+
+/** Registers the pack's font on a jsPDF document. */
+export function registerPackFont(pdf: jsPDF, fonts: PackFonts): void {
+  pdf.addFileToVFS(`${PACK_FONT}.ttf`, fonts.regular);
+  pdf.addFont(`${PACK_FONT}.ttf`, PACK_FONT, 'normal');
+  pdf.addFileToVFS(`${PACK_FONT}-Bold.ttf`, fonts.bold);
+  pdf.addFont(`${PACK_FONT}-Bold.ttf`, PACK_FONT, 'bold');
+}
+
 /** A3 landscape, millimetres. */
 export const PAGE = { w: 420, h: 297 };
 export const MARGIN = 10;

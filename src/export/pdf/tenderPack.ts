@@ -20,19 +20,13 @@ import type { Results } from '../../solver/results.ts';
 import { drawDiagram } from './diagram.ts';
 import { drawKeyPlan, planDiagramSheets } from './diagramSheets.ts';
 import { drawDiagramWindow } from './diagramWindow.ts';
-import { CONTENT, PACK_FONT, Sheets, frame } from './packPage.ts';
+import { CONTENT, PACK_FONT, Sheets, frame, registerPackFont, type PackFonts } from './packPage.ts';
 import { summarySheet } from './packSummary.ts';
 import { findingsSheet, scheduleSheet, workingSheet } from './packTables.ts';
 
-export { PACK_FONT } from './packPage.ts';
+export { PACK_FONT, registerPackFont, type PackFonts } from './packPage.ts';
 export { PACK_METHODS } from './packSummary.ts';
 export { tenderPackFileName } from '../fileNames.ts';
-
-/** The pack's font as base64 TrueType files (regular and bold). */
-export interface PackFonts {
-  regular: string;
-  bold: string;
-}
 
 export interface PackOptions {
   /** Include the working sheets (every figure's formula, inputs and result). Default true. */
@@ -58,14 +52,6 @@ function diagramSheets(pdf: jsPDF, sheets: Sheets, doc: ProjectDocument, results
     sheets.start(`Single-line diagram: sheet ${w.name}`);
     drawDiagramWindow(pdf, plan.layout, w, CONTENT, PACK_FONT, plan.windows);
   }
-}
-
-/** Registers the pack's font on a jsPDF document. */
-export function registerPackFont(pdf: jsPDF, fonts: PackFonts): void {
-  pdf.addFileToVFS(`${PACK_FONT}.ttf`, fonts.regular);
-  pdf.addFont(`${PACK_FONT}.ttf`, PACK_FONT, 'normal');
-  pdf.addFileToVFS(`${PACK_FONT}-Bold.ttf`, fonts.bold);
-  pdf.addFont(`${PACK_FONT}-Bold.ttf`, PACK_FONT, 'bold');
 }
 
 /** The tender pack as a jsPDF document (see the module comment for its sheets). */

@@ -2,9 +2,10 @@
  * Export → tender pack PDF. The pack is made in a worker (packWorker.ts), so the page stays
  * responsive; jsPDF and the pack's font are loaded there when the user first asks, so the editor
  * starts without them. Where a browser offers no module worker, it is made on the page instead.
+ * The single-line diagram alone, as SVG, is quick and made on the page.
  */
 import { useEditor } from '../../store/editorStore.ts';
-import { tenderPackFileName } from '../../export/fileNames.ts';
+import { drawingFileName, tenderPackFileName } from '../../export/fileNames.ts';
 import { download } from './fileActions.ts';
 import { fetchPackFonts } from './packFonts.ts';
 import type { PackReply, PackRequest } from './packWorker.ts';
@@ -60,6 +61,32 @@ export async function exportTenderPack(options: { working?: boolean } = {}): Pro
       .getState()
       .notify(
         `The tender pack could not be made: ${e instanceof Error ? e.message : String(e)}. Nothing was changed.`,
+        'error',
+      );
+  }
+}
+
+/**
+ * Builds the single-line diagram of the open project as SVG on the page (a fraction of a second)
+ * and downloads it; the SVG module and jsPDF, which measures its labels, are loaded on first use.
+ */
+export async function exportDrawingSvg(): Promise<void> {
+  const s = useEditor.getState();
+  // The project as it is at the click.
+  const { doc, results } = s;
+  try {
+    const [svg, fonts] = await Promise.all([
+      import('../../export/svg/diagramSvg.ts'),
+      fetchPackFonts(import.meta.env.BASE_URL),
+    ]);
+    const name = drawingFileName(doc);
+    download(svg.diagramSvg(doc, results, fonts), name, 'image/svg+xml');
+    useEditor.getState().notify(`Downloaded ${name}: the single-line diagram as SVG.`);
+  } catch (e) {
+    useEditor
+      .getState()
+      .notify(
+        `The drawing could not be made: ${e instanceof Error ? e.message : String(e)}. Nothing was changed.`,
         'error',
       );
   }

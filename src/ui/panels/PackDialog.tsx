@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useEditor } from '../../store/editorStore.ts';
 import { CAUTIONS } from '../../model/cautions.ts';
-import { exportTenderPack } from '../files/exportPack.ts';
+import { exportDrawingSvg, exportTenderPack } from '../files/exportPack.ts';
 import { Dialog } from './Dialog.tsx';
 
 /**
@@ -24,6 +24,17 @@ export function PackDialog() {
         <>
           <button type="button" onClick={close}>
             Cancel
+          </button>
+          <button
+            type="button"
+            data-testid="svg-download"
+            title="The single-line diagram alone, as on the pack's diagram sheet, for other drawings"
+            onClick={() => {
+              close();
+              void exportDrawingSvg();
+            }}
+          >
+            Download drawing (SVG)
           </button>
           <button
             type="button"
@@ -63,6 +74,10 @@ export function PackDialog() {
           </label>
         </li>
       </ul>
+      <p>
+        The drawing alone is also offered as SVG: the same single-line diagram, a large one whole at a legible
+        scale, under a line with the project, the data used and the caution.
+      </p>
       <p className="dl-note">{CAUTIONS[0]}</p>
     </Dialog>
   );

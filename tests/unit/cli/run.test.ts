@@ -23,6 +23,7 @@ describe('arguments', () => {
       dataFile: null,
       schedule: null,
       pdfFile: null,
+      svgFile: null,
     });
     expect(parseArgs(['check', '--working=C3', 'a.json'])).toMatchObject({ workingId: 'C3' });
     expect(parseArgs([])).toEqual({ command: 'help' });

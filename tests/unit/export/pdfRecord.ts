@@ -41,6 +41,9 @@ export interface Mark {
   text?: string;
   /** For text: bold or not. */
   bold?: boolean;
+  /** For text: the point and baseline option it was drawn with. */
+  at?: [number, number];
+  baseline?: string;
 }
 
 /** Wraps the drawing primitives of `pdf` so every call is recorded with its extent on the page. */
@@ -81,7 +84,14 @@ export function record(pdf: jsPDF): Mark[] {
     const top = o?.baseline === 'top' ? y : o?.baseline === 'middle' ? y - h / 2 : y - 0.8 * h;
     const left = o?.align === 'center' ? x - w / 2 : o?.align === 'right' ? x - w : x;
     const bold = pdf.getFont().fontStyle === 'bold';
-    marks.push({ kind: 'text', box: { x: left, y: top, w, h }, text: t, bold });
+    marks.push({
+      kind: 'text',
+      box: { x: left, y: top, w, h },
+      text: t,
+      bold,
+      at: [x, y],
+      baseline: o?.baseline,
+    });
     return text(t, x, y, o);
   };
   return marks;
