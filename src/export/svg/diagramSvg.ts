@@ -63,19 +63,23 @@ function headingLines(doc: ProjectDocument, results: Results): string[] {
   ];
 }
 
-/** Writes the heading lines from the top margin down; returns the widest line's width. */
-function drawHeading(pen: SvgPen, lines: string[]): number {
-  const sizes = [12, 8, 8];
-  const tops = [MARGIN, MARGIN + 6, MARGIN + 9.6];
-  let widest = 0;
+/** The heading's three lines: size (pt) and top (mm, from the heading's top). */
+const HEADING = [
+  { pt: 12, top: 0 },
+  { pt: 8, top: 6 },
+  { pt: 8, top: 9.6 },
+];
+/** From the heading's top to the drawing's top, mm. */
+const HEADING_SPACE = 16;
+
+/** Writes the heading lines with their top-left corner at (x, y). */
+function drawHeading(pen: SvgPen, lines: string[], x: number, y: number): void {
   lines.forEach((text, i) => {
     pen.setFont(PACK_FONT, i === 1 ? 'normal' : 'bold');
-    pen.setFontSize(sizes[i]!);
+    pen.setFontSize(HEADING[i]!.pt);
     pen.setTextColor(i === 1 ? GREY : INK);
-    pen.text(text, CONTENT.x, tops[i]!, { baseline: 'top' });
-    widest = Math.max(widest, pen.getTextWidth(text));
+    pen.text(text, x, y + HEADING[i]!.top, { baseline: 'top' });
   });
-  return widest;
 }
 
 /**
@@ -86,25 +90,33 @@ export function diagramSvg(doc: ProjectDocument, results: Results, fonts: PackFo
   const measure = new jsPDF({ orientation: 'landscape', unit: 'mm', format: 'a3' });
   registerPackFont(measure, fonts);
   measure.setFont(PACK_FONT, 'normal');
+  const box = drawingBox(new SvgPen(measure), doc, results);
+  // Where the drawing lands, found by drawing it once aside: the heading goes just above it and
+  // the file is cropped to both, so the drawing can be placed in a report as it is.
+  const trial = new SvgPen(measure);
+  drawDiagram(trial, doc, results, box, PACK_FONT);
+  const at = trial.bounds() ?? { x: box.x, y: box.y + HEADING_SPACE, w: 0, h: 0 };
   const pen = new SvgPen(measure);
-  const box = drawingBox(pen, doc, results);
   const lines = headingLines(doc, results);
-  const widest = drawHeading(pen, lines);
+  drawHeading(pen, lines, at.x, at.y - HEADING_SPACE);
   const drawn = drawDiagram(pen, doc, results, box, PACK_FONT);
   if (drawn.scale === 0) {
     pen.setFont(PACK_FONT, 'normal');
     pen.setFontSize(10);
     pen.setTextColor(GREY);
-    pen.text('Nothing to draw: no element has a place on the diagram.', box.x, box.y, { baseline: 'top' });
+    pen.text('Nothing to draw: no element has a place on the diagram.', at.x, at.y, { baseline: 'top' });
   }
-  const w = box.x + Math.max(box.w, widest) + box.x;
-  const h = box.y + box.h + MARGIN;
+  const all = pen.bounds()!;
+  const x = all.x - MARGIN;
+  const y = all.y - MARGIN;
+  const w = all.w + 2 * MARGIN;
+  const h = all.h + 2 * MARGIN;
   return [
     '<?xml version="1.0" encoding="UTF-8"?>',
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${num(w)}mm" height="${num(h)}mm" viewBox="0 0 ${num(w)} ${num(h)}"` +
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${num(w)}mm" height="${num(h)}mm" viewBox="${num(x)} ${num(y)} ${num(w)} ${num(h)}"` +
       ` font-family="${SVG_FONT_FAMILY}">`,
     `<title>${escapeXml(lines[0]!)}</title>`,
-    `<rect width="${num(w)}" height="${num(h)}" fill="#ffffff"/>`,
+    `<rect x="${num(x)}" y="${num(y)}" width="${num(w)}" height="${num(h)}" fill="#ffffff"/>`,
     pen.elements(),
     '</svg>',
     '',

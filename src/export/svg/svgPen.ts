@@ -53,9 +53,25 @@ export class SvgPen implements Pen {
   private width: number;
   private dash: number[] = [];
   private dashPhase = 0;
+  /** The extent of everything drawn so far (text by its measured width and the font's height). */
+  private box = { x0: Infinity, y0: Infinity, x1: -Infinity, y1: -Infinity };
 
   constructor(private readonly measure: jsPDF) {
     this.width = measure.getLineWidth();
+  }
+
+  /** What has been drawn spans this rectangle (mm), or null when nothing has been. */
+  bounds(): { x: number; y: number; w: number; h: number } | null {
+    const b = this.box;
+    return b.x0 <= b.x1 ? { x: b.x0, y: b.y0, w: b.x1 - b.x0, h: b.y1 - b.y0 } : null;
+  }
+
+  private extend(x0: number, y0: number, x1: number, y1: number): void {
+    const b = this.box;
+    b.x0 = Math.min(b.x0, x0, x1);
+    b.y0 = Math.min(b.y0, y0, y1);
+    b.x1 = Math.max(b.x1, x0, x1);
+    b.y1 = Math.max(b.y1, y0, y1);
   }
 
   /** The elements drawn so far, one a line. */
@@ -123,6 +139,8 @@ export class SvgPen implements Pen {
     const anchor = options.align === 'center' ? 'middle' : options.align === 'right' ? 'end' : null;
     const bold = this.measure.getFont().fontStyle === 'bold';
     const w = this.measure.getTextWidth(text);
+    const left = anchor === 'middle' ? x - w / 2 : anchor === 'end' ? x - w : x;
+    this.extend(left, base - h + descent, left + w, base + descent);
     this.parts.push(
       // Spaces kept as they are: a run that starts with one is placed where the space begins.
       `<text xml:space="preserve" x="${num(x)}" y="${num(base)}" font-size="${num(h)}"` +
@@ -135,6 +153,13 @@ export class SvgPen implements Pen {
   }
 
   line(x1: number, y1: number, x2: number, y2: number): this {
+    const half = this.width / 2;
+    this.extend(
+      Math.min(x1, x2) - half,
+      Math.min(y1, y2) - half,
+      Math.max(x1, x2) + half,
+      Math.max(y1, y2) + half,
+    );
     this.parts.push(
       `<line x1="${num(x1)}" y1="${num(y1)}" x2="${num(x2)}" y2="${num(y2)}"${this.paint('S')}/>`,
     );
@@ -142,16 +167,20 @@ export class SvgPen implements Pen {
   }
 
   rect(x: number, y: number, w: number, h: number, style?: string | null): this {
-    if (style !== null)
+    if (style !== null) {
+      this.extend(x, y, x + w, y + h);
       this.parts.push(
         `<rect x="${num(x)}" y="${num(y)}" width="${num(w)}" height="${num(h)}"${this.paint(style)}/>`,
       );
+    }
     return this;
   }
 
   circle(x: number, y: number, r: number, style?: string | null): this {
-    if (style !== null)
+    if (style !== null) {
+      this.extend(x - r, y - r, x + r, y + r);
       this.parts.push(`<circle cx="${num(x)}" cy="${num(y)}" r="${num(r)}"${this.paint(style)}/>`);
+    }
     return this;
   }
 

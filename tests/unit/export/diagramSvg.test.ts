@@ -93,11 +93,42 @@ describe('the demo project as SVG', () => {
   const marks = record(pdf);
   drawDiagram(pdf, doc, results, CONTENT, FONT);
 
-  test('is one <svg> document with a viewBox in millimetres, the A3 sheet’s width', () => {
+  test('is one <svg> document with a viewBox in millimetres, cropped to what it draws', () => {
     expect(root.tagName).toBe('svg');
     expect(root.getAttribute('xmlns')).toBe('http://www.w3.org/2000/svg');
-    const [x, y, w, h] = root.getAttribute('viewBox')!.split(' ').map(Number);
-    expect([x, y, w]).toEqual([0, 0, 420]);
+    const [x, y, w, h] = root.getAttribute('viewBox')!.split(' ').map(Number) as [
+      number,
+      number,
+      number,
+      number,
+    ];
+    // Within the A3 sheet the pack draws on, and holding every shape's anchor point.
+    expect(w).toBeLessThanOrEqual(420);
+    expect(h).toBeLessThanOrEqual(297);
+    for (const e of Array.from(root.children)) {
+      if (e.tagName === 'title') continue;
+      const px = Number(e.getAttribute('x') ?? e.getAttribute('x1') ?? e.getAttribute('cx'));
+      const py = Number(e.getAttribute('y') ?? e.getAttribute('y1') ?? e.getAttribute('cy'));
+      expect(px, e.outerHTML).toBeGreaterThanOrEqual(x);
+      expect(px, e.outerHTML).toBeLessThanOrEqual(x + w);
+      expect(py, e.outerHTML).toBeGreaterThanOrEqual(y);
+      expect(py, e.outerHTML).toBeLessThanOrEqual(y + h);
+    }
+    // The heading sits just above the drawing, not at the top of an empty sheet.
+    const heading = Array.from(root.getElementsByTagName('text'))[0]!;
+    expect(Number(heading.getAttribute('y')) - y).toBeLessThan(20);
+    const drawingTop = Math.min(
+      ...Array.from(root.children)
+        .slice(5) // the title, the background and the three heading lines
+        .map((e) =>
+          Number(
+            e.getAttribute('y') ??
+              e.getAttribute('y1') ??
+              Number(e.getAttribute('cy')) - Number(e.getAttribute('r')),
+          ),
+        ),
+    );
+    expect(drawingTop - Number(heading.getAttribute('y'))).toBeLessThan(25);
     expect(root.getAttribute('width')).toBe(`${w}mm`);
     expect(root.getAttribute('height')).toBe(`${h}mm`);
     expect(root.getAttribute('font-family')).toBe('DejaVu Sans Condensed, DejaVu Sans, Arial, sans-serif');
