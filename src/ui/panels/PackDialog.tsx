@@ -17,7 +17,7 @@ export function PackDialog() {
   const workingSheets = Math.max(1, Math.round(elements * 0.7));
   return (
     <Dialog
-      title="Tender pack (PDF, A3 landscape)"
+      title="Tender pack (PDF, A3 landscape) and drawing (SVG)"
       testId="pack-dialog"
       onClose={close}
       footer={
