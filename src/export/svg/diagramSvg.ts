@@ -4,7 +4,7 @@
  * labels are legible on the pack's A3 sheet sits where the sheet has it; a larger one is drawn
  * whole at the scale where labels print at 4 pt (SVG has no page to fit), not split into sheets.
  * Above it: the project title, reference and revision, the data set and limit profile used, and
- * the caution line.
+ * the caution line; under it, the standards and editions used.
  *
  * @example
  *   const svg = diagramSvg(doc, solve(doc), fonts); // "<?xml …><svg …>…</svg>"
@@ -72,6 +72,35 @@ const HEADING = [
 /** From the heading's top to the drawing's top, mm. */
 const HEADING_SPACE = 16;
 
+/** Text size of the line naming the standards, pt. */
+const STANDARDS_PT = 6.5;
+
+/**
+ * Under the drawing: the standards and editions the figures rest on, wrapped at `width` (mm)
+ * between items, from (x, y) down.
+ */
+function drawStandards(
+  pen: SvgPen,
+  references: readonly string[],
+  x: number,
+  y: number,
+  width: number,
+): void {
+  pen.setFont(PACK_FONT, 'normal');
+  pen.setFontSize(STANDARDS_PT);
+  pen.setTextColor(GREY);
+  const items = references.map((r, i) => (i === 0 ? `Standards and editions used: ${r}` : r));
+  const lines: string[] = [];
+  for (const item of items) {
+    const last = lines[lines.length - 1];
+    if (last !== undefined && pen.getTextWidth(`${last}; ${item}`) <= width)
+      lines[lines.length - 1] = `${last}; ${item}`;
+    else lines.push(item);
+  }
+  const step = STANDARDS_PT * (25.4 / 72) * 1.3;
+  lines.forEach((line, k) => pen.text(line, x, y + k * step, { baseline: 'top' }));
+}
+
 /** Writes the heading lines with their top-left corner at (x, y). */
 function drawHeading(pen: SvgPen, lines: string[], x: number, y: number): void {
   lines.forEach((text, i) => {
@@ -106,6 +135,8 @@ export function diagramSvg(doc: ProjectDocument, results: Results, fonts: PackFo
     pen.setTextColor(GREY);
     pen.text('Nothing to draw: no element has a place on the diagram.', at.x, at.y, { baseline: 'top' });
   }
+  const drawnAt = pen.bounds()!;
+  drawStandards(pen, results.references, at.x, drawnAt.y + drawnAt.h + 4, Math.max(drawnAt.w, 200));
   const all = pen.bounds()!;
   const x = all.x - MARGIN;
   const y = all.y - MARGIN;
