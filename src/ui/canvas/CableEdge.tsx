@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import { BaseEdge, EdgeLabelRenderer, getSmoothStepPath, type EdgeProps } from '@xyflow/react';
 import type { CableFlowEdge } from './flowTypes.ts';
-import { statusLook } from '../status.ts';
+import { statusLook } from '../../export/statusLook.ts';
 
 function CableEdgeView(props: EdgeProps<CableFlowEdge>) {
   const { id, sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, data, selected } = props;

@@ -31,7 +31,7 @@ import { fitViewport, MIN_ZOOM, startViewport } from './startView.ts';
 import { addPart, snap } from '../actions.ts';
 import { isPartKind, PART_MIME } from '../parts.ts';
 import { ContextMenu, type MenuTarget } from './ContextMenu.tsx';
-import { statusLook } from '../status.ts';
+import { statusLook } from '../../export/statusLook.ts';
 import type { Id } from '../../model/types.ts';
 
 const nodeTypes = { element: ElementNode };

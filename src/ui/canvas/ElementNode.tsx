@@ -2,7 +2,7 @@ import { memo } from 'react';
 import { Handle, Position, type NodeProps } from '@xyflow/react';
 import type { ElementFlowNode } from './flowTypes.ts';
 import { JunctionSymbol, LoadSymbol, SupplySymbol, TransformerSymbol, loadTitle } from './symbols.tsx';
-import { statusLook } from '../status.ts';
+import { statusLook } from '../../export/statusLook.ts';
 import type { Status } from '../../solver/results.ts';
 
 /** The line voltage a three-phase system of this U0 is named by (400/230 V), as on nameplates. */

@@ -1,4 +1,4 @@
-import { STATUS_LOOK } from '../status.ts';
+import { STATUS_LOOK } from '../../export/statusLook.ts';
 import type { Status } from '../../solver/results.ts';
 import { useEditor } from '../../store/editorStore.ts';
 import { statusBasis } from '../canvas/labels.ts';

@@ -1,5 +1,5 @@
 import type { Check } from '../../solver/protection/protectionResults.ts';
-import { statusLook } from '../status.ts';
+import { statusLook } from '../../export/statusLook.ts';
 import { fmtValue } from '../../export/format.ts';
 import { WorkingList } from './WorkingList.tsx';
 

@@ -1,6 +1,6 @@
 import { useEditor } from '../../store/editorStore.ts';
 import type { Severity } from '../../solver/results.ts';
-import { statusLook } from '../status.ts';
+import { statusLook } from '../../export/statusLook.ts';
 import './panels.css';
 import './tables.css';
 

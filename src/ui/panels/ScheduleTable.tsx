@@ -3,7 +3,7 @@ import type { Id } from '../../model/types.ts';
 import type { Schedule } from '../../export/schedules.ts';
 import { filterRows, sortRows, type SortOrder, type StatusFilter } from './scheduleSort.ts';
 import { StatusBadge } from './StatusBadge.tsx';
-import { statusLook as lookOf } from '../status.ts';
+import { statusLook as lookOf } from '../../export/statusLook.ts';
 
 interface Props {
   schedule: Schedule;

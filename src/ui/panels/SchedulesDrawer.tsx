@@ -3,7 +3,7 @@ import { useEditor } from '../../store/editorStore.ts';
 import { SCHEDULE_SHEETS, type ScheduleSheet as Sheet } from '../../export/schedules.ts';
 import { ALL_STATUSES, type StatusFilter } from './scheduleSort.ts';
 import { ScheduleTable } from './ScheduleTable.tsx';
-import { statusLook as lookOf } from '../status.ts';
+import { statusLook as lookOf } from '../../export/statusLook.ts';
 import { scheduleCsv, scheduleFileName } from '../../export/scheduleCsv.ts';
 import { download } from '../files/fileActions.ts';
 import './panels.css';

@@ -1,5 +1,5 @@
 import type { Status } from '../../solver/results.ts';
-import { statusLook } from '../status.ts';
+import { statusLook } from '../../export/statusLook.ts';
 
 export function StatusBadge({ status }: { status: Status | null | undefined }) {
   const look = statusLook(status);

@@ -1,6 +1,6 @@
 import type { Profile } from './buildProfile.ts';
 import { fmt } from '../../export/format.ts';
-import { STATUS_LOOK } from '../status.ts';
+import { STATUS_LOOK } from '../../export/statusLook.ts';
 
 const W = 330;
 const H = 210;

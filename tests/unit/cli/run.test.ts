@@ -8,7 +8,7 @@ import { nodeIo, runCli } from '../../../src/cli/run.ts';
 import { summarise } from '../../../src/cli/summary.ts';
 import { STATUS_TEXT } from '../../../src/cli/report.ts';
 import { memoryIo } from '../../fixtures/memoryIo.ts';
-import { STATUS_LOOK } from '../../../src/ui/status.ts';
+import { STATUS_LOOK } from '../../../src/export/statusLook.ts';
 import { serializeDocument } from '../../../src/model/serializeDocument.ts';
 import { newProject } from '../../../src/model/defaults.ts';
 import type { Results } from '../../../src/solver/results.ts';
