@@ -199,7 +199,7 @@ export function randomNetwork(elements: number, seed = 1): ProjectDocument {
   }
   return {
     format: 'dropline-project',
-    version: 1,
+    version: 2,
     details: {
       title: 'Benchmark',
       client: '',
@@ -213,5 +213,6 @@ export function randomNetwork(elements: number, seed = 1): ProjectDocument {
     settings: baseSettings(),
     nodes,
     cables,
+    alternatives: [],
   };
 }

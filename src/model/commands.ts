@@ -17,6 +17,12 @@ import { replaceDocument, updateDetails, updateSettings } from './commands/proje
 import { tidyLayout } from './commands/tidyLayout.ts';
 import { splitCable } from './commands/splitCable.ts';
 import type { CommandResult } from './commands/result.ts';
+import {
+  deleteAlternative,
+  keepAlternative,
+  openAlternative,
+  updateAlternative,
+} from './commands/alternatives.ts';
 
 export type { CommandResult };
 export { ok, fail } from './commands/result.ts';
@@ -46,7 +52,16 @@ export type Command =
   | { type: 'tidyLayout' }
   /** Accepted proposals from sizing or phase balancing, applied together as one step. */
   | { type: 'applyProposals'; changes: ProposedChange[] }
-  | { type: 'replaceDocument'; doc: ProjectDocument };
+  | { type: 'replaceDocument'; doc: ProjectDocument }
+  /**
+   * Keeps the current design as a named alternative (`keptAt`: ISO date and time). With
+   * `replace`, overwrites the alternative of that name with the current design.
+   */
+  | { type: 'keepAlternative'; name: string; note: string; keptAt: string; replace?: boolean }
+  /** Puts an alternative's design on the canvas; `keepCurrentAs` first keeps the current one. */
+  | { type: 'openAlternative'; name: string; keepCurrentAs?: string; keptAt: string }
+  | { type: 'updateAlternative'; name: string; patch: { name?: string; note?: string } }
+  | { type: 'deleteAlternative'; name: string };
 
 export type CommandType = Command['type'];
 
@@ -79,6 +94,14 @@ export function applyCommand(doc: ProjectDocument, command: Command): CommandRes
       return applyProposals(doc, command.changes);
     case 'replaceDocument':
       return replaceDocument(command.doc);
+    case 'keepAlternative':
+      return keepAlternative(doc, command.name, command.note, command.keptAt, command.replace);
+    case 'openAlternative':
+      return openAlternative(doc, command.name, command.keepCurrentAs, command.keptAt);
+    case 'updateAlternative':
+      return updateAlternative(doc, command.name, command.patch);
+    case 'deleteAlternative':
+      return deleteAlternative(doc, command.name);
   }
 }
 

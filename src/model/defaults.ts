@@ -242,5 +242,6 @@ export function newProject(options: { date?: string; withSupply?: boolean } = {}
     settings: defaultSettings(),
     nodes: options.withSupply === false ? [] : [newSupply('S1', { x: 0, y: 0 })],
     cables: [],
+    alternatives: [],
   };
 }

@@ -52,6 +52,8 @@ const FIELD_TEXT: Readonly<Record<string, string>> = {
   settings: 'the settings (voltages, limit profile, cable defaults and so on)',
   nodes: 'the list of nodes (supply, boards, junctions, loads)',
   cables: 'the list of cables',
+  alternatives: 'the list of named alternatives (other designs kept beside this one)',
+  keptAt: 'the date and time it was kept (ISO 8601 text)',
   position: 'a drawing position {"x": number, "y": number}',
   demand: 'the demand {"value": number, "unit": "W" | "kW" | "kVA" | "A"}',
   cpc: 'the cpc {"kind", "sizeMm2", "material"}',
@@ -88,8 +90,24 @@ export function valueAt(root: unknown, path: readonly PropertyKey[]): unknown {
   return v;
 }
 
-/** "cable C7 "Yard lighting"", "load L3", "settings, cable defaults", "project details". */
+/** The name an alternative goes by in messages: its own name, or its place in the list. */
+function alternativeLabel(root: unknown, index: number): string {
+  const name = valueAt(root, ['alternatives', index, 'name']);
+  return typeof name === 'string' && name.trim() !== ''
+    ? `alternative "${name.slice(0, 60)}"`
+    : `alternative #${index + 1}`;
+}
+
+/**
+ * "cable C7 "Yard lighting"", "load L3", "settings, cable defaults", "project details"; inside a
+ * named alternative, "alternative "Board moved": cable C7".
+ */
 export function describeElement(root: unknown, path: readonly PropertyKey[]): string {
+  if (path[0] === 'alternatives' && typeof path[1] === 'number') {
+    const label = alternativeLabel(root, path[1]);
+    if (path.length <= 3) return label;
+    return `${label}: ${describeElement(valueAt(root, ['alternatives', path[1]]), path.slice(2))}`;
+  }
   const [top, index] = path;
   if ((top === 'nodes' || top === 'cables') && typeof index === 'number') {
     const el = valueAt(root, [top, index]);
@@ -114,6 +132,8 @@ export function describeElement(root: unknown, path: readonly PropertyKey[]): st
 
 /** The field part of a path, below the element: "lengthM", "device.ratingA", "demand.value". */
 export function describeField(path: readonly PropertyKey[]): string {
+  if (path[0] === 'alternatives' && typeof path[1] === 'number')
+    return path.length > 3 ? describeField(path.slice(2)) : String(path[2] ?? 'alternative');
   const skip =
     path[0] === 'nodes' || path[0] === 'cables'
       ? 2

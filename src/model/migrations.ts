@@ -8,6 +8,7 @@
  *   settings had no `cableDefaults`.
  * - 1: unit-bearing names `lengthM` / `sizeMm2`, an explicit cpc per cable, `parallel`, and the
  *   cable defaults in settings.
+ * - 2: `alternatives`, the named designs kept beside the current one.
  */
 import type { Cable } from './types.ts';
 import { FORMAT_VERSION } from './types.ts';
@@ -84,6 +85,16 @@ export const MIGRATIONS: readonly MigrationStep[] = [
         doc.settings.cableDefaults = defaultCableDefaults();
       }
       return notes;
+    },
+  },
+  {
+    from: 1,
+    to: 2,
+    name: 'namedAlternatives',
+    description: 'add alternatives (none yet)',
+    up(doc) {
+      if (!('alternatives' in doc)) doc.alternatives = [];
+      return [];
     },
   },
 ];

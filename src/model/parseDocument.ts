@@ -7,11 +7,12 @@
  * (unknown fields are dropped with a warning), then checks across elements (duplicate ids,
  * cables naming a missing node, a cable from a node to itself).
  */
-import type { ProjectDocument } from './types.ts';
+import type { Alternative, Cable, NodeElement, ProjectDocument } from './types.ts';
 import { FORMAT_ID } from './types.ts';
 import { safeJsonParse } from './safeJson.ts';
 import { migrate } from './migrations.ts';
-import { documentSchema, MAX_ELEMENTS } from './schema.ts';
+import type * as z from 'zod';
+import { alternativeSchema, alternativesListSchema, documentSchema, MAX_ELEMENTS } from './schema.ts';
 import { describeElement, issueMessage, valueAt } from './issueText.ts';
 
 export type ParseResult =
@@ -62,10 +63,10 @@ function parseUnsafe(text: string): ParseResult {
   const counted = countElements(obj);
   if (counted) return fail([counted]);
 
-  let parsed = documentSchema.safeParse(obj);
+  let parsed = validate(obj);
   if (!parsed.success) {
     // Unknown fields (perhaps from a later minor edit or a hand edit) are dropped, not fatal.
-    const unknown = parsed.error.issues.filter((i) => i.code === 'unrecognized_keys');
+    const unknown = parsed.issues.filter((i) => i.code === 'unrecognized_keys');
     if (unknown.length > 0) {
       for (const issue of unknown) {
         const holder = valueAt(obj, issue.path);
@@ -74,16 +75,44 @@ function parseUnsafe(text: string): ParseResult {
           warnings.push(`${issueMessage(obj, issue)} ignored`);
         }
       }
-      parsed = documentSchema.safeParse(obj);
+      parsed = validate(obj);
     }
   }
-  if (!parsed.success) return fail(parsed.error.issues.map((i) => issueMessage(obj, i)));
+  if (!parsed.success) return fail(parsed.issues.map((i) => issueMessage(obj, i)));
 
-  const doc = parsed.data as ProjectDocument;
+  const doc = parsed.doc;
   const crossErrors = crossCheck(doc, obj);
   if (crossErrors.length > 0) return fail(crossErrors);
   warnings.push(...softChecks(doc));
   return { ok: true, doc, warnings };
+}
+
+type Validated = { success: true; doc: ProjectDocument } | { success: false; issues: z.core.$ZodIssue[] };
+
+/**
+ * The schema, applied to the current design and then to each alternative on its own. One pass
+ * over the whole file would gather an alternative's issues level by level into one call's
+ * arguments, which a list of 100,000 bad elements overflows.
+ */
+function validate(obj: Record<string, unknown>): Validated {
+  const { alternatives, ...rest } = obj;
+  const top = documentSchema.safeParse({ ...rest, alternatives: [] });
+  const issues: z.core.$ZodIssue[] = top.success ? [] : [...top.error.issues];
+  const list = alternativesListSchema.safeParse(alternatives);
+  const kept: Alternative[] = [];
+  if (!list.success) {
+    for (const issue of list.error.issues) issues.push({ ...issue, path: ['alternatives', ...issue.path] });
+  } else {
+    list.data.forEach((alt, k) => {
+      const one = alternativeSchema.safeParse(alt);
+      if (one.success) kept.push(one.data as Alternative);
+      else
+        for (const issue of one.error.issues)
+          issues.push({ ...issue, path: ['alternatives', k, ...issue.path] });
+    });
+  }
+  if (!top.success || issues.length > 0) return { success: false, issues };
+  return { success: true, doc: { ...(top.data as ProjectDocument), alternatives: kept } };
 }
 
 function fail(errors: string[]): ParseResult {
@@ -97,11 +126,23 @@ function fail(errors: string[]): ParseResult {
   };
 }
 
+function listLength(v: unknown): number {
+  return Array.isArray(v) ? v.length : 0;
+}
+
+/** Nodes and cables in the file, its alternatives' included. */
 function countElements(obj: Record<string, unknown>): string | null {
-  const nodes = Array.isArray(obj.nodes) ? obj.nodes.length : 0;
-  const cables = Array.isArray(obj.cables) ? obj.cables.length : 0;
-  if (nodes + cables > MAX_ELEMENTS) {
-    return `project file: ${nodes + cables} elements (nodes and cables); the most Dropline opens is ${MAX_ELEMENTS}`;
+  let total = listLength(obj.nodes) + listLength(obj.cables);
+  const alternatives = Array.isArray(obj.alternatives) ? obj.alternatives : [];
+  // Only the first few alternatives are counted here; a longer list is the schema's message.
+  for (const alt of alternatives.slice(0, 64)) {
+    if (alt !== null && typeof alt === 'object' && !Array.isArray(alt)) {
+      const a = alt as Record<string, unknown>;
+      total += listLength(a.nodes) + listLength(a.cables);
+    }
+  }
+  if (total > MAX_ELEMENTS) {
+    return `project file: ${total} elements (nodes and cables${alternatives.length > 0 ? ', its alternatives included' : ''}); the most Dropline opens is ${MAX_ELEMENTS}`;
   }
   return null;
 }
@@ -113,23 +154,44 @@ function countElements(obj: Record<string, unknown>): string | null {
  * editor can show and the user can fix; the solver reports them.
  */
 function crossCheck(doc: ProjectDocument, raw: unknown): string[] {
+  const errors = designErrors(doc, raw, []);
+  const names = new Map<string, number>();
+  doc.alternatives.forEach((alt, k) => {
+    errors.push(...designErrors(alt, raw, ['alternatives', k]));
+    const key = alt.name.toLowerCase();
+    const first = names.get(key);
+    if (first !== undefined)
+      errors.push(
+        `${describeElement(raw, ['alternatives', k])}: the name is already used by alternative #${first + 1}; give each alternative its own name`,
+      );
+    else names.set(key, k);
+  });
+  return errors;
+}
+
+/** Ids unique and every cable joining two existing, different nodes, in one design. */
+function designErrors(
+  doc: { nodes: NodeElement[]; cables: Cable[] },
+  raw: unknown,
+  at: readonly PropertyKey[],
+): string[] {
   const errors: string[] = [];
   const seen = new Map<string, string>();
   doc.nodes.forEach((n, i) => {
-    const where = describeElement(raw, ['nodes', i]);
+    const where = describeElement(raw, [...at, 'nodes', i]);
     const first = seen.get(n.id);
     if (first) errors.push(`${where}: id ${n.id} is already used by ${first}; give each element its own id`);
     else seen.set(n.id, where);
   });
   doc.cables.forEach((c, i) => {
-    const where = describeElement(raw, ['cables', i]);
+    const where = describeElement(raw, [...at, 'cables', i]);
     const first = seen.get(c.id);
     if (first) errors.push(`${where}: id ${c.id} is already used by ${first}; give each element its own id`);
     else seen.set(c.id, where);
   });
   const nodeIds = new Set(doc.nodes.map((n) => n.id));
   doc.cables.forEach((c, i) => {
-    const where = describeElement(raw, ['cables', i]);
+    const where = describeElement(raw, [...at, 'cables', i]);
     for (const end of ['from', 'to'] as const) {
       if (!nodeIds.has(c[end])) {
         errors.push(

@@ -12,8 +12,15 @@ import type { ProjectDocument } from './types.ts';
 import { FORMAT_ID, FORMAT_VERSION } from './types.ts';
 import { idProblem } from './ids.ts';
 
-/** Most elements (nodes and cables together) a file may hold. */
+/**
+ * Most elements (nodes and cables together) a file may hold, the current design and its
+ * alternatives counted together.
+ */
 export const MAX_ELEMENTS = 200_000;
+/** Most alternatives a project keeps beside its current design. */
+export const MAX_ALTERNATIVES = 20;
+/** Longest alternative name, in characters. */
+export const MAX_ALTERNATIVE_NAME = 80;
 
 const finite = () => z.number();
 const positive = () => z.number().positive();
@@ -198,6 +205,24 @@ export const settingsSchema = z.strictObject({
   cableDefaults: cableDefaultsSchema,
 });
 
+export const alternativeSchema = z
+  .strictObject({
+    name: z
+      .string()
+      .min(1)
+      .max(MAX_ALTERNATIVE_NAME)
+      .refine((s) => s.trim() === s, { message: 'no spaces at either end' }),
+    note: z.string().max(20_000),
+    keptAt: z.string().max(40).describe('When it was kept, ISO 8601.'),
+    settings: settingsSchema,
+    nodes: z.array(nodeSchema).max(MAX_ELEMENTS),
+    cables: z.array(cableSchema).max(MAX_ELEMENTS),
+  })
+  .describe('A design kept beside the current one: its own elements and settings.');
+
+/** The list itself, before each alternative is checked on its own (see parseDocument). */
+export const alternativesListSchema = z.array(z.unknown()).max(MAX_ALTERNATIVES);
+
 export const documentSchema = z
   .strictObject({
     format: z.literal(FORMAT_ID),
@@ -206,6 +231,10 @@ export const documentSchema = z
     settings: settingsSchema,
     nodes: z.array(nodeSchema).max(MAX_ELEMENTS),
     cables: z.array(cableSchema).max(MAX_ELEMENTS),
+    alternatives: z
+      .array(alternativeSchema)
+      .max(MAX_ALTERNATIVES)
+      .describe('Named alternatives: other designs for the same project, oldest first.'),
   })
   .meta({
     title: 'Dropline project',

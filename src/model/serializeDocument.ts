@@ -15,6 +15,7 @@ const KEY_ORDER: readonly string[] = [
   'settings',
   'nodes',
   'cables',
+  'alternatives',
   // details
   'title',
   'client',
@@ -94,24 +95,28 @@ const KEY_ORDER: readonly string[] = [
   'insulationFactor',
 ];
 const RANK = new Map(KEY_ORDER.map((k, i) => [k, i]));
+/** An alternative reads name first, then what it holds. */
+const ALTERNATIVE_RANK = new Map(
+  ['name', 'note', 'keptAt', 'settings', 'nodes', 'cables'].map((k, i) => [k, i - 100]),
+);
 
-function orderKeys(a: string, b: string): number {
-  const ra = RANK.get(a) ?? Infinity;
-  const rb = RANK.get(b) ?? Infinity;
+function orderKeys(a: string, b: string, top?: ReadonlyMap<string, number>): number {
+  const ra = top?.get(a) ?? RANK.get(a) ?? Infinity;
+  const rb = top?.get(b) ?? RANK.get(b) ?? Infinity;
   if (ra !== rb) return ra - rb;
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
-function ordered(value: unknown): unknown {
-  if (Array.isArray(value)) return value.map(ordered);
+function ordered(value: unknown, top?: ReadonlyMap<string, number>): unknown {
+  if (Array.isArray(value)) return value.map((v) => ordered(v, top));
   if (value !== null && typeof value === 'object') {
     const out: Record<string, unknown> = {};
-    for (const key of Object.keys(value).sort(orderKeys)) {
+    for (const key of Object.keys(value).sort((a, b) => orderKeys(a, b, top))) {
       const v = (value as Record<string, unknown>)[key];
       // defineProperty: a key such as __proto__ (never in a valid document) stays a plain key.
       if (v !== undefined)
         Object.defineProperty(out, key, {
-          value: ordered(v),
+          value: key === 'alternatives' && Array.isArray(v) ? ordered(v, ALTERNATIVE_RANK) : ordered(v),
           enumerable: true,
           writable: true,
           configurable: true,

@@ -237,8 +237,24 @@ export interface Settings {
   cableDefaults: Omit<Cable, 'id' | 'name' | 'from' | 'to'>;
 }
 
+/**
+ * A design kept beside the current one, to compare with it or to go back to: the whole
+ * distribution and its settings as they were when it was kept. The project details are shared.
+ */
+export interface Alternative {
+  /** Unique within the project, e.g. "Sub-main in 35 mm²". */
+  name: string;
+  /** What differs and why, in the user's words. */
+  note: string;
+  /** When it was kept, ISO 8601 (date and time, UTC). */
+  keptAt: string;
+  settings: Settings;
+  nodes: NodeElement[];
+  cables: Cable[];
+}
+
 export const FORMAT_ID = 'dropline-project';
-export const FORMAT_VERSION = 1;
+export const FORMAT_VERSION = 2;
 
 export interface ProjectDocument {
   format: typeof FORMAT_ID;
@@ -247,4 +263,6 @@ export interface ProjectDocument {
   settings: Settings;
   nodes: NodeElement[];
   cables: Cable[];
+  /** Other designs for the same project (named alternatives), oldest first. */
+  alternatives: Alternative[];
 }

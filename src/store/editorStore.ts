@@ -73,6 +73,14 @@ function keepExisting(doc: ProjectDocument, ids: Id[]): Id[] {
   return ids.filter((id) => known.has(id));
 }
 
+/**
+ * True when two documents hold the same design objects (keeping, renaming or deleting an
+ * alternative, or editing the details, leaves them so), and the results need not be solved again.
+ */
+function sameDesign(a: ProjectDocument, b: ProjectDocument): boolean {
+  return a.nodes === b.nodes && a.cables === b.cables && a.settings === b.settings;
+}
+
 export function createEditorStore(initial: ProjectDocument = newProject()): EditorStore {
   let noticeSeq = 0;
   let revealSeq = 0;
@@ -101,14 +109,14 @@ export function createEditorStore(initial: ProjectDocument = newProject()): Edit
       if (out.doc === doc) return out;
       const nextPast = [...past, doc].slice(-HISTORY_LIMIT);
       const nextSelection =
-        command.type === 'replaceDocument'
+        command.type === 'replaceDocument' || command.type === 'openAlternative'
           ? []
           : out.created.length > 0
             ? out.created
             : keepExisting(out.doc, selection);
       set({
         doc: out.doc,
-        results: safeSolve(out.doc),
+        results: sameDesign(out.doc, doc) ? get().results : safeSolve(out.doc),
         past: nextPast,
         future: [],
         canUndo: true,
@@ -138,7 +146,7 @@ export function createEditorStore(initial: ProjectDocument = newProject()): Edit
       if (!prev) return;
       set({
         doc: prev,
-        results: safeSolve(prev),
+        results: sameDesign(prev, doc) ? get().results : safeSolve(prev),
         past: past.slice(0, -1),
         future: [doc, ...future],
         canUndo: past.length > 1,
@@ -154,7 +162,7 @@ export function createEditorStore(initial: ProjectDocument = newProject()): Edit
       if (!next) return;
       set({
         doc: next,
-        results: safeSolve(next),
+        results: sameDesign(next, doc) ? get().results : safeSolve(next),
         past: [...past, doc].slice(-HISTORY_LIMIT),
         future: future.slice(1),
         canUndo: true,

@@ -136,7 +136,7 @@ const cableBody = fc.record(
   },
 );
 
-const documentArb: fc.Arbitrary<ProjectDocument> = fc
+const designArb = fc
   .record({
     details: fc.record({
       title: text(),
@@ -169,13 +169,28 @@ const documentArb: fc.Arbitrary<ProjectDocument> = fc
     });
     return {
       format: 'dropline-project' as const,
-      version: 1 as const,
+      version: 2 as const,
       details,
       settings: { ...defaultSettings(), limitProfile, closeThreshold },
       nodes: withIds,
       cables,
     };
   });
+
+/** A design with up to two named alternatives (each a design of its own) kept beside it. */
+const documentArb: fc.Arbitrary<ProjectDocument> = fc
+  .tuple(designArb, fc.array(fc.tuple(designArb, text(200)), { maxLength: 2 }))
+  .map(([doc, others]) => ({
+    ...doc,
+    alternatives: others.map(([other, note], k) => ({
+      name: `Option ${k + 1}`,
+      note,
+      keptAt: '2025-01-31T10:15:00.000Z',
+      settings: other.settings,
+      nodes: other.nodes,
+      cables: other.cables,
+    })),
+  }));
 
 test('save then load gives the same document', () => {
   fc.assert(

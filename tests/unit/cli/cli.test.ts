@@ -64,7 +64,7 @@ describe('dropline check', () => {
   test('a file from a newer version: exit 2', () => {
     const r = run('check', fixture('newer'));
     expect(r.code).toBe(2);
-    expect(r.err).toContain('made by a newer Dropline (version 3); this one reads up to 1');
+    expect(r.err).toContain('made by a newer Dropline (version 3); this one reads up to 2');
   });
 
   test('a missing file: exit 2', () => {

@@ -60,7 +60,7 @@ describe('migration 0 -> 1 (unitNamesAndCpc)', () => {
     );
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    expect(r.doc.version).toBe(1);
+    expect(r.doc.version).toBe(2);
     const [c1, c2] = r.doc.cables;
     expect(c1).toMatchObject({ lengthM: 35, sizeMm2: 2.5, parallel: 1 });
     expect('length' in c1! || 'size' in c1!).toBe(false);
@@ -69,7 +69,7 @@ describe('migration 0 -> 1 (unitNamesAndCpc)', () => {
     expect(c2!.cpc).toEqual({ kind: 'core', sizeMm2: 16, material: 'Cu' });
     expect(r.doc.settings.cableDefaults).toEqual(defaultCableDefaults());
     expect(r.warnings).toEqual([
-      'the file was made for version 0; updated to version 1 (unitNamesAndCpc)',
+      'the file was made for version 0; updated to version 2 (unitNamesAndCpc, namedAlternatives)',
       'cable C1: the file gave no cpc; assumed a 1.5 mm² Cu core; check it',
       'cable C2: the file gave no cpc; assumed a 16 mm² Cu core; check it',
     ]);
@@ -86,11 +86,17 @@ describe('migration 0 -> 1 (unitNamesAndCpc)', () => {
 
   test('steps run in order and each names itself', () => {
     const seen: string[] = [];
-    const steps = [{ from: 0, to: 1, name: 'first', description: '', up: () => (seen.push('first'), []) }];
+    const steps = [
+      { from: 1, to: 2, name: 'second', description: '', up: () => (seen.push('second'), []) },
+      { from: 0, to: 1, name: 'first', description: '', up: () => (seen.push('first'), []) },
+    ];
     const r = migrate({ version: 0 }, steps);
-    expect(r.ok && r.applied).toEqual(['first']);
-    expect(seen).toEqual(['first']);
-    expect(MIGRATIONS.map((s) => `${s.from}->${s.to} ${s.name}`)).toEqual(['0->1 unitNamesAndCpc']);
+    expect(r.ok && r.applied).toEqual(['first', 'second']);
+    expect(seen).toEqual(['first', 'second']);
+    expect(MIGRATIONS.map((s) => `${s.from}->${s.to} ${s.name}`)).toEqual([
+      '0->1 unitNamesAndCpc',
+      '1->2 namedAlternatives',
+    ]);
   });
 
   test('a gap in the steps is reported, not skipped', () => {
@@ -103,5 +109,25 @@ describe('migration 0 -> 1 (unitNamesAndCpc)', () => {
   test('negative or fractional versions are refused', () => {
     expect(migrate({ version: -1 }).ok).toBe(false);
     expect(migrate({ version: 0.5 }).ok).toBe(false);
+  });
+});
+
+describe('migration 1 -> 2 (namedAlternatives)', () => {
+  test('a version-1 file opens with no alternatives and says it was updated', () => {
+    const doc = { ...JSON.parse(versionZeroText([])), version: 1 };
+    doc.settings.cableDefaults = defaultCableDefaults();
+    const r = parseDocument(JSON.stringify(doc));
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.doc.version).toBe(2);
+    expect(r.doc.alternatives).toEqual([]);
+    expect(r.warnings).toEqual(['the file was made for version 1; updated to version 2 (namedAlternatives)']);
+  });
+
+  test('alternatives already in a version-1 file (a hand edit) are kept, not overwritten', () => {
+    const raw = { version: 1, alternatives: ['kept'] };
+    const r = migrate(raw);
+    expect(r.ok).toBe(true);
+    expect(raw.alternatives).toEqual(['kept']);
   });
 });

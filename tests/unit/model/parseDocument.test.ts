@@ -143,7 +143,7 @@ describe('parseDocument: checks across elements', () => {
 describe('parseDocument: format and version', () => {
   test('a file from a newer version is refused', () => {
     expect(errorsOf(textWith((d) => (d.version = 3)))).toEqual([
-      'project file: made by a newer Dropline (version 3); this one reads up to 1. Open it in a newer Dropline.',
+      'project file: made by a newer Dropline (version 3); this one reads up to 2. Open it in a newer Dropline.',
     ]);
   });
 
@@ -156,7 +156,7 @@ describe('parseDocument: format and version', () => {
 
   test('a broken version is refused', () => {
     expect(errorsOf(textWith((d) => (d.version = '1')))).toEqual([
-      'project file: version must be a whole number from 0 to 1; got "1"',
+      'project file: version must be a whole number from 0 to 2; got "1"',
     ]);
   });
 });

@@ -11,7 +11,15 @@ test('the published schema is strict and requires the format id and version', ()
   const schema = JSON.parse(projectJsonSchemaText());
   expect(schema.additionalProperties).toBe(false);
   expect(schema.properties.format.const).toBe('dropline-project');
-  expect(schema.properties.version.const).toBe(1);
-  expect(schema.required).toEqual(['format', 'version', 'details', 'settings', 'nodes', 'cables']);
+  expect(schema.properties.version.const).toBe(2);
+  expect(schema.required).toEqual([
+    'format',
+    'version',
+    'details',
+    'settings',
+    'nodes',
+    'cables',
+    'alternatives',
+  ]);
   expect(schema.properties.cables.items.properties.lengthM.minimum).toBe(0);
 });
