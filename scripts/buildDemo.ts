@@ -375,6 +375,21 @@ for (const [spec, len, c, dev] of store) {
   cable('DB4', id, spec.name, len, c.sizeMm2!, { ...c, device: dev, installation: grouped(3) });
 }
 
+// A named alternative, to compare with the design as drawn: the yard sub-main in 35 mm² all the
+// way to the store board (the armour figure is this demo's own, as every figure here is).
+const upsized = structuredClone({ settings: doc.settings, nodes: doc.nodes, cables: doc.cables });
+for (const c of upsized.cables)
+  if (c.to === 'J1' || c.to === 'DB4') {
+    c.sizeMm2 = 35;
+    c.cpc = armour(66);
+  }
+doc.alternatives.push({
+  name: 'Yard sub-main in 35 mm²',
+  note: 'Both lengths of the yard sub-main in 35 mm² SWA, to bring the store circuits within their limits.',
+  keptAt: '2025-03-14T10:30:00.000Z',
+  ...upsized,
+});
+
 const text = serializeDocument(doc);
 const check = parseDocument(text);
 if (!check.ok) throw new Error(`demo is not a valid project:\n${check.errors.join('\n')}`);

@@ -5,7 +5,7 @@ export type LabelMode = 'drop' | 'current' | 'zs' | 'fault' | 'capacity';
 export const LABEL_MODES: readonly LabelMode[] = ['drop', 'current', 'zs', 'fault', 'capacity'];
 
 export type Drawer = null | 'schedules' | 'findings';
-export type Dialog = null | 'project' | 'settings' | 'cautions' | 'help' | 'sizing' | 'pack';
+export type Dialog = null | 'project' | 'settings' | 'cautions' | 'help' | 'sizing' | 'pack' | 'alternatives';
 
 export interface ViewState {
   labelMode: LabelMode;

@@ -14,6 +14,7 @@ import { ProjectDialog } from './panels/ProjectDialog.tsx';
 import { SettingsDialog } from './panels/SettingsDialog.tsx';
 import { CautionsDialog } from './panels/CautionsDialog.tsx';
 import { PackDialog } from './panels/PackDialog.tsx';
+import { AlternativesDialog } from './panels/AlternativesDialog.tsx';
 import { HelpOverlay } from './panels/HelpOverlay.tsx';
 import { SizingDialog } from './panels/SizingDialog.tsx';
 
@@ -52,6 +53,7 @@ export function App() {
       <SettingsDialog />
       <CautionsDialog />
       <PackDialog />
+      <AlternativesDialog />
       <HelpOverlay />
       <SizingDialog />
       <FileProblemDialog />

@@ -261,3 +261,57 @@ test('sizing proposals are reviewed, applied in part as one step, and undone', a
   await expect(undo.isDisabled()).resolves.toBe(true);
   expect(s.errors).toEqual([]);
 });
+
+test('alternatives: keep the canvas design, compare with the demo’s alternative, open it, undo', async () => {
+  const doc = demo();
+  const alt = doc.alternatives[0]!;
+  const before = solve(doc);
+  const after = solve({ ...doc, settings: alt.settings, nodes: alt.nodes, cables: alt.cables });
+  // The loads whose status the alternative changes, by the engine in Node from the same file.
+  const flipped = doc.nodes
+    .filter((n) => n.kind === 'load' && before.loads[n.id]!.status !== after.loads[n.id]!.status)
+    .map((n) => n.id);
+  expect(flipped.length).toBeGreaterThan(0);
+
+  const ui = new Panels(s.page);
+  await ui.start();
+  const page = s.page;
+  await page.getByTestId('open-alternatives').click();
+  const dialog = page.getByTestId('alternatives-dialog');
+  await expect(dialog.getByTestId('alt-row-0').textContent()).resolves.toContain(alt.name);
+  await dialog.getByTestId('alt-name').fill(alt.name.toUpperCase());
+  await expect(dialog.getByRole('alert').textContent()).resolves.toContain('already an alternative');
+  await expect(dialog.getByTestId('alt-keep').isDisabled()).resolves.toBe(true);
+  await dialog.getByTestId('alt-name').fill('As drawn');
+  await dialog.getByTestId('alt-keep').click();
+  await expect(dialog.getByTestId('alt-row-1').textContent()).resolves.toContain('As drawn');
+
+  await dialog.getByTestId('alt-row-0').getByRole('button', { name: 'Compare' }).click();
+  const changed = dialog.getByTestId('compare-status');
+  for (const id of flipped) await expect(changed.textContent()).resolves.toContain(id);
+  const l = flipped[0]!;
+  const drop = (r: typeof before) => `${r.loads[l]!.cumulativePct.value.toFixed(2)} %`;
+  const row = changed.locator('tr', { hasText: l });
+  await expect(row.textContent()).resolves.toContain(drop(before));
+  await expect(row.textContent()).resolves.toContain(drop(after));
+  await expect(dialog.getByTestId('compare-cables').textContent()).resolves.toContain('→ 35 mm²');
+  await screenshot(page, 'alternatives-compare');
+
+  // The canvas design is kept as "As drawn", so opening the alternative asks nothing.
+  await dialog.getByTestId('alt-back').click();
+  await dialog.getByTestId('alt-row-0').getByRole('button', { name: 'Open' }).click();
+  await expect(page.getByTestId('alternatives-dialog').count()).resolves.toBe(0);
+  await ui.openSchedules();
+  await ui.pickRow('loads', l);
+  await ui.tab('results');
+  await expect(ui.details().getByTestId('figure-cumulative').textContent()).resolves.toBe(
+    `${after.loads[l]!.cumulativePct.value.toFixed(2)} % of U0`,
+  );
+  await page.getByRole('button', { name: 'Undo' }).click();
+  await ui.pickRow('loads', l);
+  await ui.tab('results');
+  await expect(ui.details().getByTestId('figure-cumulative').textContent()).resolves.toBe(
+    `${before.loads[l]!.cumulativePct.value.toFixed(2)} % of U0`,
+  );
+  expect(s.errors).toEqual([]);
+});

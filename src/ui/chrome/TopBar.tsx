@@ -37,6 +37,7 @@ export function TopBar() {
   const canRedo = useEditor((s) => s.canRedo);
   const view = useEditor((s) => s.view);
   const findings = useEditor((s) => s.results.findings.length);
+  const alternatives = useEditor((s) => s.doc.alternatives.length);
   const undo = useEditor((s) => s.undo);
   const redo = useEditor((s) => s.redo);
   const openDrawer = useEditor((s) => s.openDrawer);
@@ -118,6 +119,12 @@ export function TopBar() {
         <Btn label="Project" onClick={() => openDialog('project')} testId="open-project" />
         <Btn label="Settings" onClick={() => openDialog('settings')} testId="open-settings" />
         <Btn label="Sizing" onClick={() => openDialog('sizing')} testId="open-sizing" />
+        <Btn
+          label={`Alternatives${alternatives ? ` (${alternatives})` : ''}`}
+          hint="Keep the design under a name, compare designs side by side, open one on the canvas"
+          onClick={() => openDialog('alternatives')}
+          testId="open-alternatives"
+        />
         <Btn label="Cautions" onClick={() => openDialog('cautions')} testId="open-cautions" />
         <Btn label="Help" onClick={() => openDialog('help')} keys="?" testId="open-help" />
       </nav>
