@@ -18,10 +18,21 @@ export type CliArgs =
       /** Where to write the single-line diagram as SVG, or null. */
       svgFile: string | null;
     }
+  | {
+      command: 'compare';
+      file: string;
+      /** A second project file whose current design is compared with FILE's, or null. */
+      otherFile: string | null;
+      /** The alternative in FILE to compare with its current design, or null for each in turn. */
+      withName: string | null;
+      json: boolean;
+      dataFile: string | null;
+    }
   | { command: 'error'; message: string };
 
 export const USAGE = `usage: dropline check FILE [--json | --working ID | --schedule SHEET] [--pdf OUT.pdf] [--svg OUT.svg]
                       [--data TABLE]
+       dropline compare FILE [--with NAME | OTHER.json] [--json] [--data TABLE]
 
 Checks a Dropline project file: solves it and prints, per load, its path, cumulative drop, limit
 and status; per cable, Ib, drop in V and % and the cumulative %; every finding; the cautions; the
@@ -35,8 +46,9 @@ options:
                  the editor's Download CSV writes it: project details, data used and cautions, then
                  one row per element
   --pdf OUT.pdf  also write the tender pack to OUT.pdf (A3 landscape): the single-line diagram, a
-                 summary with the data, standards and cautions used, the schedules, the findings and
-                 the working behind every figure; the report is printed as usual
+                 summary with the data, standards and cautions used, the current design compared with
+                 each alternative the project keeps, the schedules, the findings and the working
+                 behind every figure; the report is printed as usual
   --svg OUT.svg  also write the single-line diagram to OUT.svg, drawn as on the tender pack's diagram
                  sheet (a large one whole at a legible scale) under a line with the project, the data
                  used and the caution; the report is printed as usual
@@ -44,12 +56,25 @@ options:
                  of the built-in one; the report and every working record name it
   --help         show this text
 
-exit status:
+dropline compare sets two designs side by side: FILE's current design against each alternative
+kept in it (in turn), against the one --with NAME names, or against the current design of a second
+file OTHER.json. It prints the totals (loads clear, tight and over, the worst load, findings, failed
+checks, conductor metal), the loads that changed status and those whose drop moved, the cables and
+the settings, supply, boards and load inputs that differ, the data used and the cautions.
+
+compare options:
+  --with NAME    compare the current design with the alternative called NAME
+  --json         print the comparison(s) as JSON for other programs (shape: docs/cli-json.md)
+  --data TABLE   solve both designs with your own conductor data set, as for check
+
+exit status of check:
   0  every load is within its limit and there is no error finding
   1  a load is over its limit, or a check failed (any error finding)
   2  the file could not be read or is not a valid project file, the --pdf or --svg file could not
      be written, or the command line is wrong
-  3  internal error while solving (please report it with the file)`;
+  3  internal error while solving (please report it with the file)
+exit status of compare: 0 when the comparison is printed; 2 as above, and for an alternative name
+the file does not hold or a file that keeps no alternatives (and no second file); 3 as above.`;
 
 /**
  * @example
@@ -60,8 +85,12 @@ export function parseArgs(argv: readonly string[]): CliArgs {
     return { command: 'help' };
   }
   const [command, ...rest] = argv;
+  if (command === 'compare') return parseCompare(rest);
   if (command !== 'check')
-    return { command: 'error', message: `unknown command "${command}"; the command is "check"` };
+    return {
+      command: 'error',
+      message: `unknown command "${command}"; the commands are "check" and "compare"`,
+    };
   let file: string | null = null;
   let json = false;
   let workingId: string | null = null;
@@ -113,4 +142,72 @@ export function parseArgs(argv: readonly string[]): CliArgs {
   if ([json, workingId !== null, schedule !== null].filter(Boolean).length > 1)
     return { command: 'error', message: 'choose one of --json, --working and --schedule' };
   return { command: 'check', file, json, workingId, dataFile, schedule, pdfFile, svgFile };
+}
+
+/** An option's value, given as `--opt VALUE` or `--opt=VALUE`; null when it is missing. */
+function optionValue(
+  rest: readonly string[],
+  i: number,
+  option: string,
+): { value: string | null; next: number } {
+  const a = rest[i]!;
+  if (a.startsWith(`${option}=`)) {
+    const v = a.slice(option.length + 1);
+    return { value: v === '' ? null : v, next: i };
+  }
+  const v = rest[i + 1];
+  return { value: v === undefined || v === '' || v.startsWith('--') ? null : v, next: i + 1 };
+}
+
+/**
+ * @example
+ *   parseArgs(['compare', 'site.json', '--with', 'Board moved']); // { command: 'compare', withName: 'Board moved', … }
+ */
+function parseCompare(rest: readonly string[]): CliArgs {
+  const files: string[] = [];
+  let withName: string | null = null;
+  let json = false;
+  let dataFile: string | null = null;
+  for (let i = 0; i < rest.length; i++) {
+    const a = rest[i]!;
+    if (a === '--json') json = true;
+    else if (a === '--with' || a.startsWith('--with=')) {
+      const { value, next } = optionValue(rest, i, '--with');
+      if (value === null)
+        return {
+          command: 'error',
+          message: '--with needs the name of an alternative, e.g. --with "Sub-main in 35 mm²"',
+        };
+      withName = value;
+      i = next;
+    } else if (a === '--data' || a.startsWith('--data=')) {
+      const { value, next } = optionValue(rest, i, '--data');
+      if (value === null)
+        return { command: 'error', message: '--data needs a data set file, e.g. --data my-cables.csv' };
+      dataFile = value;
+      i = next;
+    } else if (a.startsWith('-'))
+      return {
+        command: 'error',
+        message: `unknown option "${a}" for compare; its options are --with NAME, --json and --data TABLE`,
+      };
+    else files.push(a);
+  }
+  if (files.length === 0)
+    return {
+      command: 'error',
+      message: 'name the project file to compare, e.g. dropline compare site.json',
+    };
+  if (files.length > 2)
+    return {
+      command: 'error',
+      message: `compare takes one file (its designs) or two files; got ${files.length}: ${files.map((f) => `"${f}"`).join(', ')}`,
+    };
+  if (files.length === 2 && withName !== null)
+    return {
+      command: 'error',
+      message:
+        'choose --with NAME (an alternative in the file) or a second file, not both; to compare an alternative with another file, open it in the editor and save it as a file first',
+    };
+  return { command: 'compare', file: files[0]!, otherFile: files[1] ?? null, withName, json, dataFile };
 }

@@ -3,14 +3,14 @@
  * reader in, text and an exit status out.
  */
 import { readFileSync, renameSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
-import { parseDocument } from '../model/parseDocument.ts';
 import { MAX_TEXT_CHARS } from '../model/safeJson.ts';
 import type { ProjectDocument } from '../model/types.ts';
 import type { Results } from '../solver/results.ts';
 import { solve as realSolve } from '../solver/solve.ts';
 import type { CatalogueSet } from '../catalogue/catalogueSet.ts';
-import { parseCatalogueCsv, parseCatalogueJson } from '../catalogue/loadCatalogue.ts';
 import { parseArgs, USAGE } from './args.ts';
+import { runCompare } from './compare.ts';
+import { readDataSet, readProject } from './files.ts';
 import { buildCliJson, cliJsonText } from './jsonOutput.ts';
 import { formatReport } from './report.ts';
 import { summarise } from './summary.ts';
@@ -67,23 +67,6 @@ export const nodeIo: CliIo = {
   packFonts: packFontsFromDisk,
 };
 
-function readError(file: string, e: unknown): string {
-  const code = (e as { code?: string }).code;
-  const why =
-    code === 'ENOENT'
-      ? 'there is no such file'
-      : code === 'EACCES' || code === 'EPERM'
-        ? 'permission denied'
-        : code === 'EISDIR'
-          ? 'it is a directory, not a file'
-          : code === 'EFBIG'
-            ? `it is larger than the ${MAX_TEXT_CHARS / 1024 / 1024} MB Dropline opens`
-            : e instanceof Error
-              ? e.message
-              : String(e);
-  return `dropline: cannot read ${file}: ${why}\n`;
-}
-
 /** Why a file could not be written, in plain words. */
 function writeError(e: unknown): string {
   const code = (e as { code?: string }).code;
@@ -125,8 +108,14 @@ function writeOutput(io: CliIo, path: string, out: Output): boolean {
 }
 
 /** Writes the tender pack; false (with the reason on stderr) when it could not be written. */
-function writePack(io: CliIo, path: string, doc: ProjectDocument, results: Results): boolean {
-  const make = () => tenderPackBytes(doc, results, io.packFonts());
+function writePack(
+  io: CliIo,
+  path: string,
+  doc: ProjectDocument,
+  results: Results,
+  catalogue: CatalogueSet | undefined,
+): boolean {
+  const make = () => tenderPackBytes(doc, results, io.packFonts(), { catalogue });
   return writeOutput(io, path, { what: 'tender pack', option: '--pdf', make });
 }
 
@@ -157,45 +146,20 @@ export function runCli(
     return 2;
   }
 
-  let text: string;
-  try {
-    text = io.readText(args.file);
-  } catch (e) {
-    io.stderr(readError(args.file, e));
-    return 2;
-  }
-  const parsed = parseDocument(text);
-  if (!parsed.ok) {
-    io.stderr(
-      `dropline: ${args.file} is not a valid project file:\n${parsed.errors.map((e) => `  - ${e}\n`).join('')}`,
-    );
-    return 2;
-  }
-  for (const w of parsed.warnings) io.stderr(`dropline: note: ${w}\n`);
+  if (args.command === 'compare') return runCompare(args, io, solve);
 
+  const doc = readProject(io, args.file);
+  if (doc === null) return 2;
   let catalogue: CatalogueSet | undefined;
   if (args.dataFile !== null) {
-    let dataText: string;
-    try {
-      dataText = io.readText(args.dataFile);
-    } catch (e) {
-      io.stderr(readError(args.dataFile, e));
-      return 2;
-    }
-    const isJson = /\.json$/i.test(args.dataFile) || dataText.trimStart().startsWith('{');
-    const loaded = isJson ? parseCatalogueJson(dataText) : parseCatalogueCsv(dataText);
-    if (!loaded.ok) {
-      io.stderr(
-        `dropline: ${args.dataFile} is not a valid conductor data set:\n${loaded.errors.map((e) => `  - ${e}\n`).join('')}`,
-      );
-      return 2;
-    }
-    catalogue = loaded.catalogue;
+    const loaded = readDataSet(io, args.dataFile);
+    if (loaded === null) return 2;
+    catalogue = loaded;
   }
 
   let results: Results;
   try {
-    results = catalogue ? solve(parsed.doc, catalogue) : solve(parsed.doc);
+    results = catalogue ? solve(doc, catalogue) : solve(doc);
   } catch (e) {
     io.stderr(
       `dropline: internal error while solving ${args.file}: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}\n`,
@@ -203,11 +167,11 @@ export function runCli(
     return 3;
   }
   const summary = summarise(results);
-  if (args.pdfFile !== null && !writePack(io, args.pdfFile, parsed.doc, results)) return 2;
-  if (args.svgFile !== null && !writeDrawing(io, args.svgFile, parsed.doc, results)) return 2;
+  if (args.pdfFile !== null && !writePack(io, args.pdfFile, doc, results, catalogue)) return 2;
+  if (args.svgFile !== null && !writeDrawing(io, args.svgFile, doc, results)) return 2;
 
   if (args.workingId !== null) {
-    const text = formatElementWorking(parsed.doc, results, args.workingId);
+    const text = formatElementWorking(doc, results, args.workingId);
     if (text === null) {
       const near = similarIds(results, args.workingId);
       io.stderr(
@@ -220,12 +184,10 @@ export function runCli(
   }
   if (args.schedule !== null) {
     const sheet = SCHEDULE_SHEETS[args.schedule];
-    io.stdout(
-      scheduleCsv(sheet.title, sheet.build(parsed.doc, results), parsed.doc, results, sheet.statusLabel),
-    );
+    io.stdout(scheduleCsv(sheet.title, sheet.build(doc, results), doc, results, sheet.statusLabel));
     return summary.exitCode;
   }
-  if (args.json) io.stdout(cliJsonText(buildCliJson(parsed.doc, results, args.file, summary)));
-  else io.stdout(formatReport(parsed.doc, results, args.file, summary));
+  if (args.json) io.stdout(cliJsonText(buildCliJson(doc, results, args.file, summary)));
+  else io.stdout(formatReport(doc, results, args.file, summary));
   return summary.exitCode;
 }

@@ -290,7 +290,7 @@ test('alternatives: keep the canvas design, compare with the demo’s alternativ
   const changed = dialog.getByTestId('compare-status');
   for (const id of flipped) await expect(changed.textContent()).resolves.toContain(id);
   const l = flipped[0]!;
-  const drop = (r: typeof before) => `${r.loads[l]!.cumulativePct.value.toFixed(2)} %`;
+  const drop = (r: typeof before) => r.loads[l]!.cumulativePct.value.toFixed(2);
   const row = changed.locator('tr', { hasText: l });
   await expect(row.textContent()).resolves.toContain(drop(before));
   await expect(row.textContent()).resolves.toContain(drop(after));

@@ -5,6 +5,7 @@ import { CAUTIONS } from '../../model/cautions.ts';
 import type { Results, Status } from '../../solver/results.ts';
 import { STATUS_LOOK } from '../statusLook.ts';
 import { projectDetailRows } from '../labels.ts';
+import { COMPARISON_METHOD } from '../comparison.ts';
 import { CONTENT, GREY, INK, PACK_FONT } from './packPage.ts';
 
 /** Methods and assumptions the figures rest on, as the engine applies them (docs/solver.md, docs/protection.md). */
@@ -15,6 +16,7 @@ export const PACK_METHODS: readonly string[] = [
   'Design current is the sum of the loads below, with each load’s demand factor and each board’s diversity, per phase; Ib of a cable is its worst phase. Where the settings say so, the device rating In is used for the drop instead (conservative).',
   'Loop impedance Zs = Ze + Σ (R1 + R2) along the path at operating temperature, compared with Cmin × U0 / Ia for the protective device. Prospective fault currents use the source impedance and the cables at 20 °C with cmax.',
   'Capacity Iz is the tabulated It times the ambient, grouping and insulation factors given for the circuit; combinations with no table are reported as not assessed, never guessed.',
+  COMPARISON_METHOD,
   `Status words: ${(['within', 'close', 'over'] as const).map((k) => `${STATUS_LOOK[k].glyph} ${STATUS_LOOK[k].word} (${STATUS_LOOK[k].meaning})`).join(', ')}; boards and cables show the worst load they feed.`,
 ];
 

@@ -27,7 +27,7 @@ const TABLE_STYLE = {
  * What every pack table shares: it starts under the sheet's heading, keeps clear of the title
  * block, never splits a row over two sheets, and gives each sheet it runs onto the sheet's title.
  */
-function flowing(pdf: jsPDF, sheets: Sheets, title: string) {
+export function flowing(pdf: jsPDF, sheets: Sheets, title: string) {
   return {
     startY: CONTENT.y,
     margin: {

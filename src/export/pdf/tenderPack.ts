@@ -2,7 +2,8 @@
  * The tender pack: one A3 landscape PDF a reviewer can check without the program. Sheets, in
  * order: the single-line diagram (a key plan and several sheets when the drawing is too large for
  * legible labels on one); the summary (project, settings, data and standards used,
- * results in brief, methods and assumptions, the cautions in full); the cable, load and board
+ * results in brief, methods and assumptions, the cautions in full); where the project keeps
+ * alternatives, the current design compared with each (packComparison.ts); the cable, load and board
  * schedules; the findings; and the working behind every figure (formula, inputs with units and
  * sources, result), element by element. Every sheet carries a frame, a title block (project,
  * reference, revision, date, sheet n of N) and a one-line caution.
@@ -23,6 +24,8 @@ import { drawDiagramWindow } from './diagramWindow.ts';
 import { CONTENT, PACK_FONT, Sheets, frame, registerPackFont, type PackFonts } from './packPage.ts';
 import { summarySheet } from './packSummary.ts';
 import { findingsSheet, scheduleSheet, workingSheet } from './packTables.ts';
+import { alternativesSheet, compareAlternatives } from './packComparison.ts';
+import type { CatalogueSet } from '../../catalogue/catalogueSet.ts';
 
 export { PACK_FONT, registerPackFont, type PackFonts } from './packPage.ts';
 export { PACK_METHODS } from './packSummary.ts';
@@ -33,6 +36,11 @@ export interface PackOptions {
   working?: boolean;
   /** When the pack was made, printed in the title block; default now. */
   madeAt?: Date;
+  /**
+   * The conductor data the results were solved with, when not the built-in set: the alternatives
+   * the project keeps are solved with it too, for the "Alternatives compared" sheet.
+   */
+  catalogue?: CatalogueSet;
 }
 
 /**
@@ -74,6 +82,7 @@ export function buildTenderPack(
   diagramSheets(pdf, sheets, doc, results);
   sheets.start('Summary, data and cautions');
   summarySheet(pdf, doc, results);
+  alternativesSheet(pdf, sheets, doc, compareAlternatives(doc, results, options.catalogue));
   for (const sheet of ['cables', 'loads', 'boards'] as const) scheduleSheet(pdf, sheets, doc, results, sheet);
   findingsSheet(pdf, sheets, results);
   if (options.working !== false) workingSheet(pdf, sheets, doc, results);

@@ -12,7 +12,7 @@ import {
   alternativeSide,
   CANVAS,
   CANVAS_LABEL,
-  canvasIsKept,
+  keptAs,
   keptText,
   suggestedName,
   type DesignKey,
@@ -110,7 +110,8 @@ function Alternatives() {
     );
   }
 
-  const canvasKept = canvasIsKept(doc);
+  const canvasKeptAs = keptAs(doc);
+  const canvasKept = canvasKeptAs !== null;
   return (
     <Dialog
       title="Alternatives"
@@ -177,7 +178,9 @@ function Alternatives() {
           <tr className="dl-alt-canvas">
             <td>
               <strong>{CANVAS_LABEL}</strong>
-              <div className="dl-note">{canvasKept ? 'the same as a kept alternative' : 'not kept yet'}</div>
+              <div className="dl-note">
+                {canvasKept ? `the same as “${canvasKeptAs}”` : 'not kept as an alternative'}
+              </div>
             </td>
             <td>–</td>
             <td>

@@ -32,10 +32,13 @@ export function designSide(doc: ProjectDocument, results: Results, key: DesignKe
   return alt ? alternativeSide(doc, alt) : null;
 }
 
-/** True when the canvas holds exactly the design an alternative kept (so opening loses nothing). */
-export function canvasIsKept(doc: ProjectDocument): boolean {
+/**
+ * The alternative that holds exactly the design on the canvas (so opening another loses nothing),
+ * or null.
+ */
+export function keptAs(doc: ProjectDocument): string | null {
   const text = JSON.stringify([doc.settings, doc.nodes, doc.cables]);
-  return doc.alternatives.some((a) => JSON.stringify([a.settings, a.nodes, a.cables]) === text);
+  return doc.alternatives.find((a) => JSON.stringify([a.settings, a.nodes, a.cables]) === text)?.name ?? null;
 }
 
 /** A free name such as "Option 3". */

@@ -4,7 +4,9 @@
  * A3 landscape; every sheet framed with the title block, sheet n of N and the caution line; the
  * summary names the data set, limit profile, standards and all four cautions; the schedules hold
  * every row the editor's schedules hold; every finding is listed; the working holds each element's
- * records with the solver's own results; Unicode (Ω, Σ, mm², φ) survives.
+ * records with the solver's own results; Unicode (Ω, Σ, mm², φ) survives; a project that keeps
+ * alternatives gets the "Alternatives compared" sheet with the tables `dropline compare` prints, and
+ * one that keeps none does not.
  */
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
@@ -20,6 +22,17 @@ import { SCHEDULE_SHEETS } from '../../../src/export/schedules.ts';
 import { valueText } from '../../../src/export/working.ts';
 import { packFontsFromDisk } from '../../../src/cli/run.ts';
 import { PACK_METHODS, tenderPackBytes, tenderPackFileName } from '../../../src/export/pdf/tenderPack.ts';
+import { compareAlternatives } from '../../../src/export/pdf/packComparison.ts';
+import { comparisonTables, tableList } from '../../../src/export/comparison.ts';
+
+/** The text of every page of a pack, as poppler reads it. */
+function pdfPages(pack: Uint8Array): string[] {
+  const file = join(mkdtempSync(join(tmpdir(), 'dropline-pack-')), 'pack.pdf');
+  writeFileSync(file, pack);
+  return execFileSync('pdftotext', ['-raw', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8' })
+    .split('\f')
+    .filter((p, k, all) => k < all.length - 1 || p.trim() !== '');
+}
 
 function demo(): ProjectDocument {
   const parsed = parseDocument(readFileSync('public/demo-project.json', 'utf8'));
@@ -133,6 +146,36 @@ describe('the tender pack', () => {
     for (const w of results.cables[cable.id]!.working) expect(all).toContain(flat(w.title));
     expect(all).toMatch(/Ω/);
     expect(all).toMatch(/φ/);
+  });
+
+  test('the project’s alternatives are compared with the current design after the summary', () => {
+    expect(doc.alternatives.length).toBeGreaterThan(0);
+    const firstPageOf = (title: string) => pages.findIndex((p) => p.trimStart().startsWith(title));
+    const at = firstPageOf('Alternatives compared');
+    expect(at).toBeGreaterThan(firstPageOf('Summary, data and cautions'));
+    expect(at).toBeLessThan(firstPageOf('Cable schedule'));
+    const sheet = flat(pages.filter((p) => p.trimStart().startsWith('Alternatives compared')).join(' '));
+    for (const alt of doc.alternatives) expect(sheet).toContain(`Current design against “${alt.name}”`);
+    // The same tables `dropline compare` prints: every short cell of every table is on the sheet.
+    for (const c of compareAlternatives(doc, results)) {
+      for (const t of tableList(comparisonTables(c))) {
+        expect(sheet).toContain(t.title);
+        const cells = t.rows.length > 0 ? [...t.headers, ...t.rows.flat()] : [t.empty];
+        for (const cell of cells)
+          if (cell.length > 0 && cell.length < 30) expect(sheet).toContain(flat(cell));
+      }
+    }
+    // The conductor-metal working once, with the densities and their sources.
+    expect(sheet.match(/Conductor metal: working/g)).toHaveLength(1);
+    expect(sheet).toContain('ρ Cu = 8890 kg/m³ (IEC 60028');
+    expect(sheet).toContain('ρ Al = 2703 kg/m³ (IEC 60889');
+  });
+
+  test('a project that keeps no alternatives has no comparison sheet', () => {
+    const alone = { ...doc, alternatives: [] };
+    const text = pdfPages(tenderPackBytes(alone, solve(alone), packFontsFromDisk(), { working: false }));
+    expect(text.some((p) => p.includes('Alternatives compared'))).toBe(false);
+    expect(text.some((p) => p.trimStart().startsWith('Summary, data and cautions'))).toBe(true);
   });
 
   test('can leave the working out', () => {
