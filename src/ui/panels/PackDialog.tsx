@@ -12,6 +12,7 @@ export function PackDialog() {
   const open = useEditor((s) => s.view.dialog === 'pack');
   const close = useEditor((s) => s.closeDialog);
   const elements = useEditor((s) => s.doc.nodes.length + s.doc.cables.length);
+  const alternatives = useEditor((s) => s.doc.alternatives.length);
   const [working, setWorking] = useState(true);
   if (!open) return null;
   const workingSheets = Math.max(1, Math.round(elements * 0.7));
@@ -60,6 +61,13 @@ export function PackDialog() {
           a summary: project, settings, conductor data, drop limits, standards and editions, methods and
           assumptions, and the cautions;
         </li>
+        {alternatives > 0 && (
+          <li>
+            the design set against each of its {alternatives}{' '}
+            {alternatives === 1 ? 'alternative' : 'alternatives'}: loads that changed status, drops that
+            moved, cables changed, conductor metal;
+          </li>
+        )}
         <li>the cable, load and board schedules, and every finding;</li>
         <li>
           <label>
