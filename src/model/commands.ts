@@ -7,7 +7,18 @@
  *   const out = applyCommand(doc, { type: 'connectCable', from: 'B1', to: 'L3' });
  *   if (out.ok) doc = out.doc; else show(out.error);
  */
-import type { Cable, Id, NodeElement, Position, ProjectDetails, ProjectDocument, Settings } from './types.ts';
+import type {
+  Cable,
+  Id,
+  NodeElement,
+  PlanPoint,
+  Position,
+  ProjectDetails,
+  ProjectDocument,
+  Settings,
+  SitePlan,
+} from './types.ts';
+import { placeOnPlan, setSitePlan } from './commands/plan.ts';
 import { addNode, moveNodes, updateNode, type NodePatch } from './commands/nodes.ts';
 import { connectCable, updateCable, type CablePatch } from './commands/cables.ts';
 import { deleteElements } from './commands/deleteElements.ts';
@@ -61,7 +72,13 @@ export type Command =
   /** Puts an alternative's design on the canvas; `keepCurrentAs` first keeps the current one. */
   | { type: 'openAlternative'; name: string; keepCurrentAs?: string; keptAt: string }
   | { type: 'updateAlternative'; name: string; patch: { name?: string; note?: string } }
-  | { type: 'deleteAlternative'; name: string };
+  | { type: 'deleteAlternative'; name: string }
+  /**
+   * Places elements on the site plan (`plan: null` takes one off); cables measured on the plan
+   * that touch them get their new lengths in the same step.
+   */
+  | { type: 'placeOnPlan'; moves: { id: Id; plan: PlanPoint | null }[] }
+  | { type: 'setSitePlan'; plan: SitePlan | null };
 
 export type CommandType = Command['type'];
 
@@ -102,6 +119,10 @@ export function applyCommand(doc: ProjectDocument, command: Command): CommandRes
       return updateAlternative(doc, command.name, command.patch);
     case 'deleteAlternative':
       return deleteAlternative(doc, command.name);
+    case 'placeOnPlan':
+      return placeOnPlan(doc, command.moves);
+    case 'setSitePlan':
+      return setSitePlan(doc, command.plan);
   }
 }
 

@@ -54,6 +54,13 @@ const FIELD_TEXT: Readonly<Record<string, string>> = {
   cables: 'the list of cables',
   alternatives: 'the list of named alternatives (other designs kept beside this one)',
   keptAt: 'the date and time it was kept (ISO 8601 text)',
+  plan: 'a place on the site plan {"xM", "yM"} (or, for the project, the site plan {"image", "widthM"})',
+  xM: 'metres from the left of the site plan',
+  yM: 'metres from the top of the site plan',
+  widthM: 'the metres the site plan spans across',
+  image: 'the site plan picture as a PNG, JPEG or SVG data URL',
+  route: 'the plan measurement {"allowanceM"}',
+  allowanceM: 'the metres added to the length measured on the plan',
   position: 'a drawing position {"x": number, "y": number}',
   demand: 'the demand {"value": number, "unit": "W" | "kW" | "kVA" | "A"}',
   cpc: 'the cpc {"kind", "sizeMm2", "material"}',
@@ -125,6 +132,7 @@ export function describeElement(root: unknown, path: readonly PropertyKey[]): st
     return `${kind}${idText}${nameText}`;
   }
   if (top === 'details') return 'project details';
+  if (top === 'plan') return 'site plan';
   if (top === 'settings' && path[1] === 'cableDefaults') return 'settings, cable defaults';
   if (top === 'settings') return 'settings';
   return 'project file';

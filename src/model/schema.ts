@@ -37,6 +37,30 @@ export const idSchema = z
 const name = () => z.string().max(200);
 
 export const positionSchema = z.strictObject({ x: finite(), y: finite() });
+/** Largest site a plan may describe, metres across. */
+export const MAX_PLAN_M = 100_000;
+/** Longest plan image, as data URL text (about 9 MB of picture). */
+export const MAX_PLAN_IMAGE_CHARS = 12_000_000;
+export const planPointSchema = z
+  .strictObject({
+    xM: z.number().min(-MAX_PLAN_M).max(MAX_PLAN_M),
+    yM: z.number().min(-MAX_PLAN_M).max(MAX_PLAN_M),
+  })
+  .describe('Place on the site plan, metres from the plan’s top-left corner.');
+export const sitePlanSchema = z
+  .strictObject({
+    image: z
+      .string()
+      .max(MAX_PLAN_IMAGE_CHARS)
+      .regex(/^data:image\/(png|jpeg|svg\+xml);base64,[A-Za-z0-9+/=]*$/, {
+        message: 'a PNG, JPEG or SVG data URL',
+      }),
+    widthM: z.number().positive().max(MAX_PLAN_M).describe('Metres the plan image spans across.'),
+  })
+  .describe('The site plan that elements are placed on to measure cable lengths.');
+export const planRouteSchema = z
+  .strictObject({ allowanceM: z.number().min(0).max(1000) })
+  .describe('Length measured on the site plan (rectilinear) plus this allowance, metres.');
 const phaseCount = z.union([z.literal(1), z.literal(3)]);
 // Spelled out rather than built from PHASES / LOAD_KINDS so the inferred types are the literal
 // unions; the agreement check below catches any drift from types.ts.
@@ -53,6 +77,7 @@ export const supplySchema = z.strictObject({
   id: idSchema,
   name: name(),
   position: positionSchema,
+  plan: planPointSchema.optional(),
   phases: phaseCount,
   u0V: z.number().positive().max(1000).describe('Nominal line-to-neutral voltage U0, volts.'),
   earthing: z.enum(['TN-S', 'TN-C-S', 'TT']),
@@ -69,6 +94,7 @@ export const boardSchema = z.strictObject({
   id: idSchema,
   name: name(),
   position: positionSchema,
+  plan: planPointSchema.optional(),
   diversity: fraction().describe("Diversity applied to the board's outgoing demand, 0 to 1 (1 = none)."),
 });
 
@@ -77,6 +103,7 @@ export const junctionSchema = z.strictObject({
   id: idSchema,
   name: name(),
   position: positionSchema,
+  plan: planPointSchema.optional(),
 });
 
 export const motorStartSchema = z.strictObject({
@@ -90,6 +117,7 @@ export const loadSchema = z.strictObject({
   id: idSchema,
   name: name(),
   position: positionSchema,
+  plan: planPointSchema.optional(),
   loadKind: z.enum([
     'lighting',
     'sockets',
@@ -170,6 +198,7 @@ export const cableSchema = z.strictObject({
   from: idSchema.describe('Id of the upstream node (towards the supply).'),
   to: idSchema.describe('Id of the downstream node.'),
   ...cableBody,
+  route: planRouteSchema.optional(),
 });
 
 export const cableDefaultsSchema = z.strictObject(cableBody);
@@ -235,6 +264,7 @@ export const documentSchema = z
       .array(alternativeSchema)
       .max(MAX_ALTERNATIVES)
       .describe('Named alternatives: other designs for the same project, oldest first.'),
+    plan: sitePlanSchema.optional(),
   })
   .meta({
     title: 'Dropline project',

@@ -19,6 +19,33 @@ export interface Position {
   y: number;
 }
 
+/** A place on the site plan, in metres from the plan image's top-left corner (x right, y down). */
+export interface PlanPoint {
+  xM: number;
+  yM: number;
+}
+
+/**
+ * The site plan: a drawing of the site (a scanned or exported floor plan) that boards and loads
+ * are placed on, so a cable's length can be measured from where its ends are.
+ */
+export interface SitePlan {
+  /** The drawing as a data URL (PNG, JPEG or SVG). */
+  image: string;
+  /** How many metres the drawing's full width spans on site (its scale). */
+  widthM: number;
+}
+
+/**
+ * A cable whose length is measured on the site plan: the rectilinear distance between its ends'
+ * plan points (cables follow walls and containment, not the straight line) plus an allowance
+ * for rises, drops and terminations. Its `lengthM` is kept equal to that by every edit.
+ */
+export interface PlanRoute {
+  /** Added to the measured distance: rises, drops, bends, terminations, metres. */
+  allowanceM: number;
+}
+
 export type Earthing = 'TN-S' | 'TN-C-S' | 'TT';
 export type SupplyOwnership = 'public' | 'private';
 
@@ -35,6 +62,8 @@ export interface Supply {
   id: Id;
   name: string;
   position: Position;
+  /** Where the element stands on the site plan, if placed there. */
+  plan?: PlanPoint;
   phases: PhaseCount;
   /** Nominal line-to-neutral voltage U0. */
   u0V: number;
@@ -57,6 +86,8 @@ export interface Board {
   id: Id;
   name: string;
   position: Position;
+  /** Where the element stands on the site plan, if placed there. */
+  plan?: PlanPoint;
   /** Diversity applied to the board's outgoing demand (1 = none). */
   diversity: number;
 }
@@ -67,6 +98,8 @@ export interface Junction {
   id: Id;
   name: string;
   position: Position;
+  /** Where the element stands on the site plan, if placed there. */
+  plan?: PlanPoint;
 }
 
 export type LoadKind =
@@ -108,6 +141,8 @@ export interface Load {
   id: Id;
   name: string;
   position: Position;
+  /** Where the element stands on the site plan, if placed there. */
+  plan?: PlanPoint;
   loadKind: LoadKind;
   category: LoadCategory;
   demand: Demand;
@@ -197,6 +232,8 @@ export interface Cable {
   parallel: number;
   device?: Device;
   installation?: Installation;
+  /** Present when the length is measured on the site plan rather than typed. */
+  route?: PlanRoute;
 }
 
 export interface ProjectDetails {
@@ -234,7 +271,7 @@ export interface Settings {
   /** Id of the conductor data set the solver uses (the built-in one unless the user loaded theirs). */
   dataSet: string;
   /** Defaults for a newly drawn cable. */
-  cableDefaults: Omit<Cable, 'id' | 'name' | 'from' | 'to'>;
+  cableDefaults: Omit<Cable, 'id' | 'name' | 'from' | 'to' | 'route'>;
 }
 
 /**
@@ -265,4 +302,6 @@ export interface ProjectDocument {
   cables: Cable[];
   /** Other designs for the same project (named alternatives), oldest first. */
   alternatives: Alternative[];
+  /** The site plan, shared by every alternative (each places its own elements on it). */
+  plan?: SitePlan;
 }

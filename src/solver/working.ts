@@ -144,6 +144,14 @@ export function cableWorking(s: DropState, j: number): Working[] {
   return out;
 }
 
+/** Where a cable's length came from: typed, or measured on the site plan (with how). */
+function lengthSource(s: DropState, j: number, id: string): string {
+  const route = (s.cables[j] as unknown as { route?: { allowanceM?: unknown } }).route;
+  if (route && typeof route === 'object' && typeof route.allowanceM === 'number')
+    return `${field('cable', id, 'lengthM')}, measured on the site plan: rectilinear distance between its ends + ${route.allowanceM} m allowance, rounded up to 0.1 m`;
+  return field('cable', id, 'lengthM');
+}
+
 function dropRecord(s: DropState, j: number, ib: number): Working {
   const id = s.cableIds.at(j);
   const method = dropMethod(s, j);
@@ -157,7 +165,7 @@ function dropRecord(s: DropState, j: number, ib: number): Working {
       name: 'L',
       value: s.cableLengthM[j] as number,
       unit: 'm (one way)',
-      source: field('cable', id, 'lengthM'),
+      source: lengthSource(s, j, id),
     },
     { name: 'r', value: (row?.rOhmPerM ?? NaN) / parallel, unit: 'Ω/m', source: catalogueSource(s, j) },
     {

@@ -4,6 +4,7 @@ import { MAX_PARALLEL } from '../bounds.ts';
 import { describeCable, describeNode } from './describe.ts';
 import { nextIdFor, documentIds } from '../ids.ts';
 import { newCable } from '../defaults.ts';
+import { withMeasuredLengths } from '../planLengths.ts';
 
 export type CablePatch = Partial<Omit<Cable, 'id'>>;
 
@@ -21,6 +22,7 @@ const CABLE_FIELDS: readonly string[] = [
   'parallel',
   'device',
   'installation',
+  'route',
 ];
 
 /** Why a cable from `from` to `to` cannot exist, or null when it can. */
@@ -131,12 +133,26 @@ export function updateCable(doc: ProjectDocument, id: Id, patch: CablePatch): Co
     const problem = connectionProblem(doc, from, to, cable.id);
     if (problem) return fail(`${describeCable(cable)}: ${problem}`);
   }
+  if (
+    patch.route !== undefined &&
+    !(
+      Number.isFinite(patch.route.allowanceM) &&
+      patch.route.allowanceM >= 0 &&
+      patch.route.allowanceM <= 1000
+    )
+  ) {
+    return fail(
+      `${describeCable(cable)}: the allowance on the plan length must be 0 to 1000 metres; got ${patch.route.allowanceM}.`,
+    );
+  }
   const merged: Record<string, unknown> = { ...cable };
   for (const [key, value] of Object.entries(patch)) {
     if (value === undefined) delete merged[key];
     else merged[key] = value;
   }
+  // A length typed over a measured one means the user measures it themselves from now on.
+  if (patch.lengthM !== undefined && !('route' in patch)) delete merged.route;
   const cables = doc.cables.slice();
   cables[index] = merged as unknown as Cable;
-  return ok({ ...doc, cables });
+  return ok(withMeasuredLengths({ ...doc, cables }, new Set([cable.id])));
 }

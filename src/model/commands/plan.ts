@@ -1,0 +1,62 @@
+/** Placing elements on the site plan, and the plan itself. */
+import type { Id, PlanPoint, ProjectDocument, SitePlan } from '../types.ts';
+import { MAX_PLAN_IMAGE_CHARS, MAX_PLAN_M } from '../schema.ts';
+import { withMeasuredLengths } from '../planLengths.ts';
+import { describeNode } from './describe.ts';
+import { fail, ok, type CommandResult } from './result.ts';
+
+function pointProblem(p: PlanPoint): string | null {
+  const ok = (v: number) => Number.isFinite(v) && Math.abs(v) <= MAX_PLAN_M;
+  return ok(p.xM) && ok(p.yM) ? null : `a plan point is two numbers of metres within ±${MAX_PLAN_M}`;
+}
+
+/**
+ * Puts elements on the plan (or takes them off with `plan: null`) and measures again every cable
+ * whose length comes from the plan and that touches them: one undo step.
+ */
+export function placeOnPlan(
+  doc: ProjectDocument,
+  moves: { id: Id; plan: PlanPoint | null }[],
+): CommandResult {
+  const byId = new Map(moves.map((m) => [m.id, m.plan]));
+  const nodes = doc.nodes.slice();
+  let changed = 0;
+  for (let k = 0; k < nodes.length; k++) {
+    const n = nodes[k]!;
+    if (!byId.has(n.id)) continue;
+    const plan = byId.get(n.id)!;
+    if (plan) {
+      const problem = pointProblem(plan);
+      if (problem) return fail(`${describeNode(n)}: ${problem}; got ${plan.xM}, ${plan.yM}.`);
+      nodes[k] = { ...n, plan: { xM: plan.xM, yM: plan.yM } };
+    } else {
+      const { plan: _dropped, ...rest } = n;
+      nodes[k] = rest as typeof n;
+    }
+    changed++;
+  }
+  if (changed !== byId.size) {
+    const missing = [...byId.keys()].filter((id) => !doc.nodes.some((n) => n.id === id));
+    return fail(`No element ${missing.join(', ')} to place on the plan; it may have been deleted.`);
+  }
+  return ok(withMeasuredLengths({ ...doc, nodes }, new Set(byId.keys())));
+}
+
+/** Sets or removes the site plan drawing and its scale. */
+export function setSitePlan(doc: ProjectDocument, plan: SitePlan | null): CommandResult {
+  if (plan === null) {
+    const { plan: _dropped, ...rest } = doc;
+    return ok(rest);
+  }
+  if (!/^data:image\/(png|jpeg|svg\+xml);base64,/.test(plan.image))
+    return fail('The site plan must be a PNG, JPEG or SVG picture.');
+  if (plan.image.length > MAX_PLAN_IMAGE_CHARS)
+    return fail(
+      `The site plan picture is ${(plan.image.length / 1e6).toFixed(1)} MB as text; the most is ${MAX_PLAN_IMAGE_CHARS / 1e6} MB. Export it smaller (a PNG of about 2000 pixels across is plenty).`,
+    );
+  if (!(Number.isFinite(plan.widthM) && plan.widthM > 0 && plan.widthM <= MAX_PLAN_M))
+    return fail(
+      `The site plan's width must be a positive number of metres up to ${MAX_PLAN_M}; got ${plan.widthM}.`,
+    );
+  return ok({ ...doc, plan: { image: plan.image, widthM: plan.widthM } });
+}

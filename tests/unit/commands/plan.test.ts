@@ -1,0 +1,120 @@
+import { describe, expect, test } from 'vitest';
+import { applyCommand, type Command } from '../../../src/model/commands.ts';
+import { measureOnPlan, planDistanceM, roundUpTenth } from '../../../src/model/planLengths.ts';
+import { parseDocument } from '../../../src/model/parseDocument.ts';
+import { serializeDocument } from '../../../src/model/serializeDocument.ts';
+import { createEditorStore } from '../../../src/store/editorStore.ts';
+import type { ProjectDocument } from '../../../src/model/types.ts';
+import { smallNetwork } from './fixture.ts';
+
+// A 1 × 1 pixel PNG, as a data URL (any valid picture will do for the file checks).
+const PIXEL =
+  'data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAQAAAC1HAwCAAAAC0lEQVR42mNkYAAAAAYAAjCB0C8AAAAASUVORK5CYII=';
+
+function run(doc: ProjectDocument, command: Command): ProjectDocument {
+  const out = applyCommand(doc, command);
+  if (!out.ok) throw new Error(out.error);
+  return out.doc;
+}
+
+/** S1 at (0, 0), DB1 at (12, 5), L1 at (20, 9) on the plan; C1 and C2 measured there. */
+function placed(): ProjectDocument {
+  let doc = run(smallNetwork(), {
+    type: 'placeOnPlan',
+    moves: [
+      { id: 'S1', plan: { xM: 0, yM: 0 } },
+      { id: 'DB1', plan: { xM: 12, yM: 5 } },
+      { id: 'L1', plan: { xM: 20, yM: 9 } },
+    ],
+  });
+  doc = run(doc, { type: 'updateCable', id: 'C1', patch: { route: { allowanceM: 3 } } });
+  return run(doc, { type: 'updateCable', id: 'C2', patch: { route: { allowanceM: 2.04 } } });
+}
+
+const cable = (doc: ProjectDocument, id: string) => doc.cables.find((c) => c.id === id)!;
+
+describe('lengths measured on the site plan', () => {
+  test('rectilinear distance plus the allowance, rounded up to 0.1 m (common practice)', () => {
+    expect(planDistanceM({ xM: 0, yM: 0 }, { xM: 12, yM: -5 })).toBe(17);
+    expect(roundUpTenth(17.01)).toBe(17.1);
+    expect(roundUpTenth(17)).toBe(17);
+    // Float noise does not push a whole tenth up: 0.1 + 0.2 is 0.30000000000000004.
+    expect(roundUpTenth(0.1 + 0.2)).toBe(0.3);
+    const doc = placed();
+    expect(cable(doc, 'C1').lengthM).toBe(20); // 12 + 5 + 3
+    expect(cable(doc, 'C2').lengthM).toBe(14.1); // 8 + 4 + 2.04 = 14.04 → 14.1
+    const byId = new Map(doc.nodes.map((n) => [n.id, n]));
+    expect(measureOnPlan(cable(doc, 'C2'), byId)).toEqual({ distanceM: 12, allowanceM: 2.04, lengthM: 14.1 });
+  });
+
+  test('moving a board on the plan lengthens its sub-main and shortens its final, in one step', () => {
+    const doc = run(placed(), { type: 'placeOnPlan', moves: [{ id: 'DB1', plan: { xM: 16, yM: 7 } }] });
+    expect(cable(doc, 'C1').lengthM).toBe(26); // 16 + 7 + 3
+    expect(cable(doc, 'C2').lengthM).toBe(8.1); // 4 + 2 + 2.04
+    // C3 has no route: its typed length stays.
+    expect(cable(doc, 'C3').lengthM).toBe(cable(placed(), 'C3').lengthM);
+    const store = createEditorStore(placed());
+    const before = store.getState().results.loads.L1!.cumulativePct.value;
+    store.getState().dispatch({ type: 'placeOnPlan', moves: [{ id: 'DB1', plan: { xM: 2, yM: 1 } }] });
+    expect(store.getState().results.loads.L1!.cumulativePct.value).not.toBe(before);
+    store.getState().undo();
+    expect(store.getState().results.loads.L1!.cumulativePct.value).toBe(before);
+  });
+
+  test('an end not on the plan leaves the length as it was; typing a length stops measuring', () => {
+    let doc = run(placed(), { type: 'placeOnPlan', moves: [{ id: 'L1', plan: null }] });
+    expect(cable(doc, 'C2').lengthM).toBe(14.1);
+    expect(doc.nodes.find((n) => n.id === 'L1')!.plan).toBeUndefined();
+    doc = run(placed(), { type: 'updateCable', id: 'C1', patch: { lengthM: 31 } });
+    expect(cable(doc, 'C1')).toMatchObject({ lengthM: 31 });
+    expect(cable(doc, 'C1').route).toBeUndefined();
+    doc = run(doc, { type: 'placeOnPlan', moves: [{ id: 'DB1', plan: { xM: 1, yM: 1 } }] });
+    expect(cable(doc, 'C1').lengthM).toBe(31);
+  });
+
+  test('bad points, allowances and pictures are refused with the fix', () => {
+    const err = (c: Command) => {
+      const out = applyCommand(placed(), c);
+      return out.ok ? '' : out.error;
+    };
+    expect(err({ type: 'placeOnPlan', moves: [{ id: 'DB1', plan: { xM: NaN, yM: 0 } }] })).toMatch(
+      /board DB1.*two numbers of metres/,
+    );
+    expect(err({ type: 'placeOnPlan', moves: [{ id: 'DB9', plan: { xM: 1, yM: 0 } }] })).toMatch(
+      /No element DB9/,
+    );
+    expect(err({ type: 'updateCable', id: 'C1', patch: { route: { allowanceM: -1 } } })).toMatch(
+      /allowance on the plan length must be 0 to 1000 metres; got -1/,
+    );
+    expect(err({ type: 'setSitePlan', plan: { image: 'data:text/html;base64,AAAA', widthM: 40 } })).toMatch(
+      /PNG, JPEG or SVG/,
+    );
+    expect(err({ type: 'setSitePlan', plan: { image: PIXEL, widthM: 0 } })).toMatch(
+      /width must be a positive/,
+    );
+  });
+
+  test('the plan and the placed elements are saved and read back; a bad plan in a file names the field', () => {
+    const doc = run(placed(), { type: 'setSitePlan', plan: { image: PIXEL, widthM: 48 } });
+    const text = serializeDocument(doc);
+    const back = parseDocument(text);
+    expect(back.ok && back.doc).toEqual(doc);
+    const bad = JSON.parse(text);
+    bad.nodes[1].plan.xM = 'left';
+    bad.plan.widthM = -2;
+    const r = parseDocument(JSON.stringify(bad));
+    expect(r.ok ? [] : r.errors).toEqual([
+      'board DB1 "Board 1": plan.xM must be metres from the left of the site plan (a finite number); got the text "left"',
+      'site plan: widthM must be the metres the site plan spans across, above 0; got -2',
+    ]);
+  });
+
+  test('the working says a length was measured on the plan', async () => {
+    const { solve } = await import('../../../src/solver/solve.ts');
+    const r = solve(placed());
+    const drop = r.cables.C1!.working.find((w) => w.key === 'drop')!;
+    expect(drop.inputs.find((i) => i.name === 'L')!.source).toMatch(
+      /measured on the site plan.*\+ 3 m allowance/,
+    );
+  });
+});
