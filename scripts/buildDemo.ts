@@ -375,6 +375,81 @@ for (const [spec, len, c, dev] of store) {
   cable('DB4', id, spec.name, len, c.sizeMm2!, { ...c, device: dev, installation: grouped(3) });
 }
 
+// The site plan: an invented drawing of the site (workshop, offices, finishing shop, yard and
+// timber store), 130 m across. Boards stand where the sub-main lengths above put them; each load
+// stands near its board, and a cable whose typed length is at least its rectilinear distance on
+// the plan is measured there, with the rest as its allowance, so the lengths stay as typed.
+const PLAN_W = 130;
+const PLAN_H = 75;
+const svg = [
+  `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${PLAN_W * 10} ${PLAN_H * 10}" width="${PLAN_W * 10}" height="${PLAN_H * 10}">`,
+  '<rect width="100%" height="100%" fill="#fdfdfb"/>',
+  '<g fill="#f1eee6" stroke="#6b6455" stroke-width="4">',
+  '<rect x="50" y="50" width="400" height="300"/>',
+  '<rect x="500" y="50" width="250" height="200"/>',
+  '<rect x="500" y="300" width="300" height="200"/>',
+  '<rect x="980" y="420" width="280" height="280"/>',
+  '</g>',
+  '<rect x="840" y="80" width="420" height="300" fill="#eef2ea" stroke="#9aa58c" stroke-width="3" stroke-dasharray="16 10"/>',
+  '<path d="M 450 200 L 950 200 L 950 300 L 1100 300 L 1100 420" fill="none" stroke="#b9ad92" stroke-width="10" stroke-dasharray="24 12"/>',
+  '<g font-family="sans-serif" font-size="26" fill="#4d483d">',
+  '<text x="70" y="90">Workshop</text><text x="520" y="90">Offices</text>',
+  '<text x="520" y="340">Finishing shop</text><text x="1000" y="460">Timber store</text>',
+  '<text x="860" y="120">Yard</text><text x="620" y="190" font-size="20">buried duct</text>',
+  '</g>',
+  '<g stroke="#1e2931" stroke-width="4"><path d="M 60 720 L 260 720 M 60 708 L 60 732 M 160 712 L 160 728 M 260 708 L 260 732"/></g>',
+  '<text x="60" y="700" font-family="sans-serif" font-size="22" fill="#1e2931">0        10        20 m</text>',
+  '</svg>',
+].join('');
+doc.plan = { image: `data:image/svg+xml;base64,${Buffer.from(svg).toString('base64')}`, widthM: PLAN_W };
+const BOARD_PLAN: Record<string, [number, number]> = {
+  S1: [42, 21],
+  MB: [40, 20],
+  DB2: [55, 12],
+  DB3: [60, 40],
+  J1: [95, 30],
+  DB4: [110, 50],
+};
+for (const n of doc.nodes) {
+  const at = BOARD_PLAN[n.id];
+  if (at) n.plan = { xM: at[0], yM: at[1] };
+}
+// Loads in a row below their board, inside its building.
+const byParent = new Map<string, string[]>();
+for (const c of doc.cables) {
+  const to = doc.nodes.find((n) => n.id === c.to);
+  if (to?.kind === 'load') byParent.set(c.from, [...(byParent.get(c.from) ?? []), to.id]);
+}
+const ROW_SPAN: Record<string, [number, number, number]> = {
+  MB: [8, 42, 31],
+  DB2: [52, 73, 22],
+  DB3: [52, 78, 47],
+  DB4: [100, 124, 66],
+};
+for (const [board, loads] of byParent) {
+  const [x0, x1, y] = ROW_SPAN[board] ?? [0, 0, 0];
+  const at = BOARD_PLAN[board] ?? [0, 0];
+  loads.forEach((id, k) => {
+    const n = doc.nodes.find((x) => x.id === id)!;
+    const length = doc.cables.find((c) => c.to === id)?.lengthM ?? 0;
+    // Within reach of its cable: the rectilinear distance leaves at least 1 m of allowance.
+    const dy = Math.min(y - at[1], length / 2);
+    const reach = Math.max(0, length - dy - 1);
+    const want = loads.length === 1 ? (x0 + x1) / 2 : x0 + ((x1 - x0) * k) / (loads.length - 1);
+    const x = Math.min(at[0] + reach, Math.max(at[0] - reach, want));
+    n.plan = { xM: Math.round(x * 10) / 10, yM: Math.round((at[1] + dy) * 10) / 10 };
+  });
+}
+const planOf = new Map(doc.nodes.map((n) => [n.id, n.plan]));
+for (const c of doc.cables) {
+  const a = planOf.get(c.from);
+  const b = planOf.get(c.to);
+  if (!a || !b) continue;
+  const d = Math.abs(a.xM - b.xM) + Math.abs(a.yM - b.yM);
+  const allowance = Math.round((c.lengthM - d) * 10) / 10;
+  if (allowance >= 0) c.route = { allowanceM: allowance };
+}
+
 // A named alternative, to compare with the design as drawn: the yard sub-main in 35 mm² all the
 // way to the store board (the armour figure is this demo's own, as every figure here is).
 const upsized = structuredClone({ settings: doc.settings, nodes: doc.nodes, cables: doc.cables });

@@ -46,6 +46,7 @@ export interface EditorState {
   reveal(id: Id): void;
   setLabelMode(mode: LabelMode): void;
   setShowLabels(show: boolean): void;
+  setCanvasView(canvas: ViewState['canvas']): void;
   openDrawer(drawer: Drawer): void;
   openDialog(dialog: Exclude<Dialog, null>): void;
   closeDialog(): void;
@@ -88,7 +89,7 @@ export function createEditorStore(initial: ProjectDocument = newProject()): Edit
     doc: initial,
     results: safeSolve(initial),
     selection: [],
-    view: { labelMode: 'drop', showLabels: true, drawer: null, dialog: null },
+    view: { labelMode: 'drop', showLabels: true, drawer: null, dialog: null, canvas: 'diagram' },
     past: [],
     future: [],
     canUndo: false,
@@ -187,6 +188,9 @@ export function createEditorStore(initial: ProjectDocument = newProject()): Edit
     },
     setShowLabels(showLabels) {
       set({ view: { ...get().view, showLabels } });
+    },
+    setCanvasView(canvas) {
+      set({ view: { ...get().view, canvas } });
     },
     openDrawer(drawer) {
       set({ view: { ...get().view, drawer } });

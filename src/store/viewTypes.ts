@@ -13,6 +13,8 @@ export interface ViewState {
   showLabels: boolean;
   drawer: Drawer;
   dialog: Dialog;
+  /** What the canvas shows: the single-line diagram, or the site plan the elements stand on. */
+  canvas: 'diagram' | 'plan';
 }
 
 export interface Notice {

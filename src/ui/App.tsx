@@ -1,4 +1,6 @@
 import { Canvas } from './canvas/Canvas.tsx';
+import { PlanCanvas } from './plan/PlanCanvas.tsx';
+import { useEditor } from '../store/editorStore.ts';
 import { Tray } from './tray/Tray.tsx';
 import { TopBar } from './chrome/TopBar.tsx';
 import { NoticeBar } from './chrome/NoticeBar.tsx';
@@ -34,13 +36,14 @@ function onWindowDrop(e: React.DragEvent) {
 
 export function App() {
   useShortcuts();
+  const canvasView = useEditor((s) => s.view.canvas);
   return (
     <main className="ed-app" data-testid="app" onDragOver={onWindowDragOver} onDrop={onWindowDrop}>
       <TopBar />
       <div className="ed-body">
         <Tray />
         <div className="ed-centre">
-          <Canvas />
+          {canvasView === 'plan' ? <PlanCanvas /> : <Canvas />}
           <LabelModeBar />
           <StatusKey />
           <NoticeBar />

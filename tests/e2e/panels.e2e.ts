@@ -315,3 +315,63 @@ test('alternatives: keep the canvas design, compare with the demo’s alternativ
   );
   expect(s.errors).toEqual([]);
 });
+
+test('site plan: dragging a board re-measures its cables while it moves; the engine agrees; undo', async () => {
+  const ui = new Panels(s.page);
+  await ui.start();
+  const page = s.page;
+  await page.getByTestId('canvas-plan').click();
+  const label = page.getByTestId('plan-cable-C28');
+  await expect(label.textContent()).resolves.toBe('C28 · 38.0 m');
+  const marker = page.getByTestId('plan-marker-DB4');
+  const box = (await marker.boundingBox())!;
+  await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(box.x - 60, box.y - 40, { steps: 8 });
+  // Still dragging: the sub-main is shorter already.
+  const during = Number(/([\d.]+) m/.exec((await label.textContent()) ?? '')![1]);
+  expect(during).toBeLessThan(38);
+  await screenshot(page, 'site-plan-drag');
+  await page.mouse.up();
+  await page.waitForTimeout(700);
+
+  // The autosaved document: every cable measured on the plan has the length its route gives,
+  // and the details show the engine's figure for a load below the moved board.
+  const text = await page.evaluate(
+    () =>
+      new Promise<string>((resolve, reject) => {
+        const req = indexedDB.open('dropline', 1);
+        req.onsuccess = () => {
+          const get = req.result.transaction('autosave').objectStore('autosave').get('current');
+          get.onsuccess = () => resolve((get.result as { text: string }).text);
+          get.onerror = () => reject(get.error);
+        };
+        req.onerror = () => reject(req.error);
+      }),
+  );
+  const parsed = parseDocument(text);
+  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+  const doc = parsed.doc;
+  const at = new Map(doc.nodes.map((n) => [n.id, n.plan]));
+  for (const c of doc.cables.filter((x) => x.route)) {
+    const a = at.get(c.from)!;
+    const b = at.get(c.to)!;
+    const d = Math.abs(a.xM - b.xM) + Math.abs(a.yM - b.yM) + c.route!.allowanceM;
+    expect(c.lengthM).toBeGreaterThanOrEqual(d - 1e-9);
+    expect(c.lengthM).toBeLessThan(d + 0.1 + 1e-9);
+  }
+  const c28 = doc.cables.find((c) => c.id === 'C28')!;
+  await expect(label.textContent()).resolves.toBe(`C28 · ${c28.lengthM.toFixed(1)} m`);
+  const l27 = solve(doc).loads.L27!.cumulativePct.value;
+  expect(l27).not.toBeCloseTo(solve(demo()).loads.L27!.cumulativePct.value, 3);
+  await ui.openSchedules();
+  await ui.pickRow('loads', 'L27');
+  await ui.tab('results');
+  await expect(ui.details().getByTestId('figure-cumulative').textContent()).resolves.toBe(
+    `${l27.toFixed(2)} % of U0`,
+  );
+
+  await page.getByRole('button', { name: 'Undo' }).click();
+  await expect(label.textContent()).resolves.toBe('C28 · 38.0 m');
+  expect(s.errors).toEqual([]);
+});

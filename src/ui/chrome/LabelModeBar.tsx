@@ -14,8 +14,37 @@ export function LabelModeBar() {
   const view = useEditor((s) => s.view);
   const setLabelMode = useEditor((s) => s.setLabelMode);
   const setShowLabels = useEditor((s) => s.setShowLabels);
+  const setCanvasView = useEditor((s) => s.setCanvasView);
+  const views = (
+    <span role="group" aria-label="Canvas shows" className="ed-canvas-views">
+      {(['diagram', 'plan'] as const).map((v) => (
+        <button
+          key={v}
+          type="button"
+          className={`ed-seg${view.canvas === v ? ' is-on' : ''}`}
+          aria-pressed={view.canvas === v}
+          data-testid={`canvas-${v}`}
+          title={
+            v === 'diagram'
+              ? 'The single-line diagram'
+              : 'The site plan: where the boards and loads stand, and cable lengths measured there'
+          }
+          onClick={() => setCanvasView(v)}
+        >
+          {v === 'diagram' ? 'Diagram' : 'Site plan'}
+        </button>
+      ))}
+    </span>
+  );
+  if (view.canvas === 'plan')
+    return (
+      <div className="ed-labels" role="group" aria-label="Canvas">
+        {views}
+      </div>
+    );
   return (
     <div className="ed-labels" role="group" aria-label="Labels show">
+      {views}
       <span className="ed-group-caption">Labels</span>
       {LABEL_MODES.map((m) => (
         <button

@@ -98,6 +98,17 @@ export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
         set: (_c, lengthM) => ({ lengthM }),
       },
       {
+        kind: 'number',
+        key: 'route.allowanceM',
+        label: 'Added to the plan length',
+        unit: 'm',
+        rule: { min: 0, max: 1000 },
+        hint: 'The length is measured on the site plan (along x, then y, between its ends) plus this allowance for rises, drops and terminations.',
+        shown: (c) => c.route !== undefined,
+        get: (c) => c.route?.allowanceM,
+        set: (_c, allowanceM) => ({ route: { allowanceM } }),
+      },
+      {
         kind: 'choice',
         key: 'phases',
         label: 'Phases',

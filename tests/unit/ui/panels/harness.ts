@@ -53,7 +53,7 @@ export function loadIntoStore(doc: ProjectDocument, selection: Id[] = []): void 
     canUndo: false,
     canRedo: false,
     selection,
-    view: { labelMode: 'drop', showLabels: true, drawer: null, dialog: null },
+    view: { labelMode: 'drop', showLabels: true, drawer: null, dialog: null, canvas: 'diagram' },
     cautionsAcknowledged: true,
   });
 }

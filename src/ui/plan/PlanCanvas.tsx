@@ -1,0 +1,269 @@
+/**
+ * The site plan: the elements placed on a scaled drawing of the site, and each cable along the
+ * route its length is measured on. Dragging a board re-measures the cables that follow the plan
+ * and solves again while it moves; letting go is one undo step.
+ */
+import { useCallback, useMemo, useRef, useState } from 'react';
+import {
+  Background,
+  BackgroundVariant,
+  Controls,
+  Panel,
+  ReactFlow,
+  ReactFlowProvider,
+  useReactFlow,
+  type NodeChange,
+} from '@xyflow/react';
+import { useEditor, editorStore } from '../../store/editorStore.ts';
+import { safeSolve } from '../../store/safeSolve.ts';
+import { applyCommand } from '../../model/commands.ts';
+import type { Id, PlanPoint } from '../../model/types.ts';
+import { MarkerView, PictureView, PlanCableView } from './PlanParts.tsx';
+import {
+  MARKER,
+  PICTURE_ID,
+  PX_PER_M,
+  planEdges,
+  planNodes,
+  type PlanEdge,
+  type PlanNode,
+} from './planFlow.ts';
+import { readPlanPicture } from './planPicture.ts';
+import './plan.css';
+
+const nodeTypes = { marker: MarkerView, picture: PictureView };
+const edgeTypes = { planCable: PlanCableView };
+
+/** A plan point to 0.1 m. */
+function toPoint(x: number, y: number): PlanPoint {
+  const r = (v: number) => Math.round(v * 10) / 10;
+  return { xM: r((x + MARKER / 2) / PX_PER_M), yM: r((y + MARKER / 2) / PX_PER_M) };
+}
+
+function PlanBar() {
+  const doc = useEditor((s) => s.doc);
+  const selection = useEditor((s) => s.selection);
+  const dispatch = useEditor((s) => s.dispatch);
+  const notify = useEditor((s) => s.notify);
+  const flow = useReactFlow();
+  const file = useRef<HTMLInputElement>(null);
+  const [allowance, setAllowance] = useState('2');
+  const unplaced = doc.nodes.filter((n) => !n.plan);
+  const placedIds = new Set(doc.nodes.filter((n) => n.plan).map((n) => n.id));
+  const measurable = doc.cables.filter((c) => placedIds.has(c.from) && placedIds.has(c.to));
+  // With a selection, the selected cables (a new allowance for measured ones too); without, only
+  // the cables not measured yet, so allowances already set are never overwritten in bulk.
+  const chosen =
+    selection.length > 0
+      ? measurable.filter((c) => selection.includes(c.id))
+      : measurable.filter((c) => !c.route);
+  const allowanceM = Number(allowance);
+  const allowanceOk =
+    allowance.trim() !== '' && Number.isFinite(allowanceM) && allowanceM >= 0 && allowanceM <= 1000;
+
+  const placeAtCentre = (id: Id) => {
+    const el = document.querySelector('.pl-canvas .react-flow')?.getBoundingClientRect();
+    const centre = el
+      ? flow.screenToFlowPosition({ x: el.left + el.width / 2, y: el.top + el.height / 2 })
+      : { x: 0, y: 0 };
+    dispatch({
+      type: 'placeOnPlan',
+      moves: [{ id, plan: toPoint(centre.x - MARKER / 2, centre.y - MARKER / 2) }],
+    });
+  };
+
+  return (
+    <Panel position="top-left" className="pl-bar">
+      <div className="pl-row">
+        <button type="button" onClick={() => file.current?.click()} data-testid="plan-picture">
+          {doc.plan ? 'Change plan picture…' : 'Plan picture…'}
+        </button>
+        <input
+          ref={file}
+          type="file"
+          accept="image/png,image/jpeg,image/svg+xml"
+          hidden
+          data-testid="plan-picture-input"
+          onChange={(e) => {
+            const f = e.target.files?.[0];
+            e.target.value = '';
+            if (!f) return;
+            void readPlanPicture(f).then(
+              (image) => dispatch({ type: 'setSitePlan', plan: { image, widthM: doc.plan?.widthM ?? 50 } }),
+              (err: unknown) => notify(err instanceof Error ? err.message : String(err), 'error'),
+            );
+          }}
+        />
+        {doc.plan && (
+          <label title="How many metres the plan picture spans from its left edge to its right edge: its scale">
+            Picture width{' '}
+            <input
+              key={doc.plan.widthM}
+              type="number"
+              min={0.1}
+              step="any"
+              defaultValue={doc.plan.widthM}
+              data-testid="plan-width"
+              onBlur={(e) => {
+                const widthM = Number(e.target.value);
+                if (doc.plan && widthM !== doc.plan.widthM)
+                  dispatch({ type: 'setSitePlan', plan: { image: doc.plan.image, widthM } });
+              }}
+              onKeyDown={(e) => {
+                if (e.key === 'Enter') (e.target as HTMLInputElement).blur();
+              }}
+            />{' '}
+            m
+          </label>
+        )}
+        <span className="pl-sep" />
+        <label title="Added to each measured length for rises, drops and terminations">
+          Allowance{' '}
+          <input
+            value={allowance}
+            onChange={(e) => setAllowance(e.target.value)}
+            className="pl-short"
+            data-testid="plan-allowance"
+            aria-invalid={!allowanceOk}
+          />{' '}
+          m
+        </label>
+        <button
+          type="button"
+          disabled={chosen.length === 0 || !allowanceOk}
+          data-testid="plan-measure"
+          title="The length of each cable becomes its route on the plan (along x, then y) plus the allowance; moving its ends changes it"
+          onClick={() => {
+            const out = dispatch({
+              type: 'applyProposals',
+              changes: chosen.map((c) => ({ target: 'cable', id: c.id, patch: { route: { allowanceM } } })),
+            });
+            if (out.ok)
+              notify(
+                `${chosen.length} ${chosen.length === 1 ? 'cable is' : 'cables are'} now measured on the plan. Undo puts the typed lengths back.`,
+              );
+          }}
+        >
+          {selection.length > 0
+            ? `Measure the selected cables on the plan (${chosen.length})`
+            : `Measure the cables not measured yet (${chosen.length})`}
+        </button>
+      </div>
+      {unplaced.length > 0 && (
+        <div className="pl-row pl-unplaced" data-testid="plan-unplaced">
+          <span>Not on the plan yet ({unplaced.length}):</span>
+          {unplaced.slice(0, 40).map((n) => (
+            <button
+              key={n.id}
+              type="button"
+              title={`Place ${n.name} in the middle of the view`}
+              onClick={() => placeAtCentre(n.id)}
+            >
+              {n.id}
+            </button>
+          ))}
+          {unplaced.length > 40 && <span>… and {unplaced.length - 40} more</span>}
+        </div>
+      )}
+      {!doc.plan && (
+        <p className="pl-hint">
+          Load a picture of the site plan (PNG, JPEG or SVG) and give its width in metres; then place the
+          boards and loads where they stand. Cables measured on the plan change length when their ends move.
+        </p>
+      )}
+    </Panel>
+  );
+}
+
+function PlanView() {
+  const doc = useEditor((s) => s.doc);
+  const results = useEditor((s) => s.results);
+  const selection = useEditor((s) => s.selection);
+  const [drag, setDrag] = useState<Record<Id, PlanPoint> | null>(null);
+  // The picture's height comes from the browser (its aspect ratio); everything else is fixed.
+  const [pictureHeight, setPictureHeight] = useState<number | null>(null);
+
+  // While a marker moves, the cables measured on the plan are measured again and solved live.
+  const live = useMemo(() => {
+    if (!drag) return { doc, results };
+    const out = applyCommand(doc, {
+      type: 'placeOnPlan',
+      moves: Object.entries(drag).map(([id, plan]) => ({ id, plan })),
+    });
+    return out.ok ? { doc: out.doc, results: safeSolve(out.doc) } : { doc, results };
+  }, [doc, results, drag]);
+
+  const nodes = useMemo(
+    () => planNodes(live.doc, live.results, selection, pictureHeight),
+    [live, selection, pictureHeight],
+  );
+  const edges = useMemo(() => planEdges(live.doc, live.results, selection), [live, selection]);
+
+  const onNodesChange = useCallback((changes: NodeChange<PlanNode>[]) => {
+    let next: Record<Id, PlanPoint> | null = null;
+    const picks: Id[] = [];
+    let picked = false;
+    for (const c of changes) {
+      if (c.type === 'position' && c.position && c.dragging) {
+        next ??= {};
+        next[c.id] = toPoint(c.position.x, c.position.y);
+      }
+      if (c.type === 'dimensions' && c.id === PICTURE_ID && c.dimensions)
+        setPictureHeight(c.dimensions.height);
+      if (c.type === 'select') {
+        picked = true;
+        if (c.selected) picks.push(c.id);
+      }
+    }
+    if (next) {
+      const moved = next;
+      setDrag((d) => ({ ...(d ?? {}), ...moved }));
+    }
+    if (picked) editorStore.getState().setSelection(picks);
+  }, []);
+
+  const onNodeDragStop = useCallback(() => {
+    setDrag((d) => {
+      if (d)
+        editorStore.getState().dispatch({
+          type: 'placeOnPlan',
+          moves: Object.entries(d).map(([id, plan]) => ({ id, plan })),
+        });
+      return null;
+    });
+  }, []);
+
+  return (
+    <div className="pl-canvas" data-testid="plan-canvas">
+      <ReactFlow<PlanNode, PlanEdge>
+        nodes={nodes}
+        edges={edges}
+        nodeTypes={nodeTypes}
+        edgeTypes={edgeTypes}
+        onNodesChange={onNodesChange}
+        onEdgeClick={(_e, edge) => editorStore.getState().setSelection([edge.id])}
+        onPaneClick={() => editorStore.getState().setSelection([])}
+        onNodeDragStop={onNodeDragStop}
+        nodesConnectable={false}
+        deleteKeyCode={null}
+        disableKeyboardA11y
+        minZoom={0.05}
+        maxZoom={4}
+        fitView
+        onError={(code, message) => console.error(`React Flow error ${code}: ${message}`)}
+      >
+        <Background variant={BackgroundVariant.Lines} gap={PX_PER_M * 5} color="#eef1f3" />
+        <Controls showInteractive={false} position="bottom-left" />
+        <PlanBar />
+      </ReactFlow>
+    </div>
+  );
+}
+
+export function PlanCanvas() {
+  return (
+    <ReactFlowProvider>
+      <PlanView />
+    </ReactFlowProvider>
+  );
+}
