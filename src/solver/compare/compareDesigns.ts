@@ -135,6 +135,7 @@ const CABLE_FIELDS: readonly FieldSpec[] = [
   ['from', 'fed from'],
   ['to', 'feeds'],
   ['lengthM', 'length', 'm'],
+  ['route.allowanceM', 'allowance on the plan length', 'm'],
   ['sizeMm2', 'size', 'mm²'],
   ['material', 'material'],
   ['insulation', 'insulation'],
@@ -381,6 +382,15 @@ export function compareDesigns(a: DesignSide, b: DesignSide): DesignComparison {
           label: 'place on the drawing',
           a: `(${num(na.position.x)}, ${num(na.position.y)})`,
           b: `(${num(nb.position.x)}, ${num(nb.position.y)})`,
+        });
+      const pa = na.plan;
+      const pb = nb.plan;
+      if (pa?.xM !== pb?.xM || pa?.yM !== pb?.yM)
+        changes.push({
+          field: 'plan',
+          label: 'place on the site plan',
+          a: pa ? `(${num(pa.xM)} m, ${num(pa.yM)} m)` : 'not placed',
+          b: pb ? `(${num(pb.xM)} m, ${num(pb.yM)} m)` : 'not placed',
         });
       if (changes.length > 0)
         nodes.push({ id, kind: either.kind, name: either.name, presence: 'both', changes });

@@ -100,6 +100,7 @@ describe('compareDesigns', () => {
     other.settings.limitProfile = 'iecPrivate';
     const db = other.nodes.find((n) => n.id === 'DB')!;
     db.position = { x: 40, y: 0 };
+    db.plan = { xM: 12.5, yM: 3 };
     if (db.kind === 'board') db.diversity = 0.8;
     const l1 = other.nodes.find((n) => n.id === 'L1')!;
     if (l1.kind === 'load') l1.demand = { value: 20, unit: 'A' };
@@ -119,6 +120,7 @@ describe('compareDesigns', () => {
         changes: [
           { field: 'diversity', label: 'diversity', a: '1', b: '0.8' },
           { field: 'position', label: 'place on the drawing', a: '(0, 0)', b: '(40, 0)' },
+          { field: 'plan', label: 'place on the site plan', a: 'not placed', b: '(12.5 m, 3 m)' },
         ],
       },
       { id: 'J1', kind: 'junction', name: 'Joint', presence: 'added', changes: [] },
