@@ -3,7 +3,8 @@
  * route its length is measured on. Dragging a board re-measures the cables that follow the plan
  * and solves again while it moves; letting go is one undo step.
  */
-import { useCallback, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { registerCanvas } from '../canvasApi.ts';
 import {
   Background,
   BackgroundVariant,
@@ -180,6 +181,19 @@ function PlanView() {
   const results = useEditor((s) => s.results);
   const selection = useEditor((s) => s.selection);
   const [drag, setDrag] = useState<Record<Id, PlanPoint> | null>(null);
+  const flow = useReactFlow();
+  // Fit and 1:1 from the top bar and the keyboard act on the plan while it is shown. A part added
+  // from the tray still goes onto the diagram (near its top), to be placed on the plan from here.
+  useEffect(() => {
+    registerCanvas({
+      fitView: () => void flow.fitView({ duration: 250 }),
+      startView: () => void flow.fitView(),
+      zoomActual: () => void flow.zoomTo(1, { duration: 0 }),
+      centreOn: (p) => void flow.setCenter(p.x, p.y, { zoom: Math.max(flow.getZoom(), 1), duration: 300 }),
+      viewCentre: () => ({ x: 0, y: 0 }),
+    });
+    return () => registerCanvas(null);
+  }, [flow]);
   // The picture's height comes from the browser (its aspect ratio); everything else is fixed.
   const [pictureHeight, setPictureHeight] = useState<number | null>(null);
 
