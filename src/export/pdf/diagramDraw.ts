@@ -68,7 +68,7 @@ export function measurer(pdf: Pen, font: string): Measure {
 }
 
 /** Colour, width and dash of a status (`k` mm per px), so a cable's status never rests on colour alone. */
-function applyStatus(pdf: Pen, status: Status | null, k: number): void {
+export function applyStatus(pdf: Pen, status: Status | null, k: number): void {
   const look = statusLook(status);
   pdf.setDrawColor(...rgb(look.colour));
   pdf.setLineWidth(look.strokeWidth * k);

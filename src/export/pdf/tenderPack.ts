@@ -25,6 +25,7 @@ import { CONTENT, PACK_FONT, Sheets, frame, registerPackFont, type PackFonts } f
 import { summarySheet } from './packSummary.ts';
 import { findingsSheet, scheduleSheet, workingSheet } from './packTables.ts';
 import { alternativesSheet, compareAlternatives } from './packComparison.ts';
+import { drawPlanSheet, hasPlanSheet, rasterOf, type PlanPicture } from './packPlan.ts';
 import type { CatalogueSet } from '../../catalogue/catalogueSet.ts';
 
 export { PACK_FONT, registerPackFont, type PackFonts } from './packPage.ts';
@@ -41,6 +42,11 @@ export interface PackOptions {
    * the project keeps are solved with it too, for the "Alternatives compared" sheet.
    */
   catalogue?: CatalogueSet;
+  /**
+   * The site plan picture as a raster, when the project's own is an SVG (the editor draws it to
+   * a PNG first); a PNG or JPEG picture in the project is used as it is.
+   */
+  planPicture?: PlanPicture;
 }
 
 /**
@@ -80,6 +86,10 @@ export function buildTenderPack(
   });
   const sheets = new Sheets(pdf);
   diagramSheets(pdf, sheets, doc, results);
+  if (hasPlanSheet(doc)) {
+    sheets.start('Site plan');
+    drawPlanSheet(pdf, doc, results, options.planPicture ?? rasterOf(pdf, doc));
+  }
   sheets.start('Summary, data and cautions');
   summarySheet(pdf, doc, results);
   alternativesSheet(pdf, sheets, doc, compareAlternatives(doc, results, options.catalogue));

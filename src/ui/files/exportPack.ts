@@ -9,6 +9,38 @@ import { drawingFileName, tenderPackFileName } from '../../export/fileNames.ts';
 import { download } from './fileActions.ts';
 import { fetchPackFonts } from './packFonts.ts';
 import type { PackReply, PackRequest } from './packWorker.ts';
+import type { PlanPicture } from '../../export/pdf/packPlan.ts';
+import type { SitePlan } from '../../model/types.ts';
+
+/** Longest side of the plan picture in the pack, pixels: sharp on A3 without a heavy file. */
+const PLAN_RASTER_PX = 2400;
+
+/**
+ * An SVG site plan drawn to a PNG on the page (the worker and jsPDF cannot draw SVG); null when
+ * the picture is already PNG or JPEG, or cannot be drawn (the pack then says so on the sheet).
+ */
+async function planRaster(plan: SitePlan | undefined): Promise<PlanPicture | null> {
+  if (!plan || !plan.image.startsWith('data:image/svg+xml')) return null;
+  try {
+    const img = new Image();
+    img.src = plan.image;
+    await img.decode();
+    const w0 = img.naturalWidth || 1200;
+    const h0 = img.naturalHeight || 800;
+    const k = PLAN_RASTER_PX / Math.max(w0, h0);
+    const canvas = document.createElement('canvas');
+    canvas.width = Math.round(w0 * k);
+    canvas.height = Math.round(h0 * k);
+    const g = canvas.getContext('2d');
+    if (!g) return null;
+    g.fillStyle = '#ffffff';
+    g.fillRect(0, 0, canvas.width, canvas.height);
+    g.drawImage(img, 0, 0, canvas.width, canvas.height);
+    return { dataUrl: canvas.toDataURL('image/png'), widthPx: canvas.width, heightPx: canvas.height };
+  } catch {
+    return null;
+  }
+}
 
 function inWorker(request: PackRequest): Promise<Uint8Array<ArrayBuffer>> {
   return new Promise((resolve, reject) => {
@@ -34,6 +66,7 @@ async function onPage(request: PackRequest): Promise<Uint8Array<ArrayBuffer>> {
   const { results } = useEditor.getState();
   return pack.tenderPackBytes(request.doc, results, fonts, {
     working: request.working,
+    ...(request.planPicture ? { planPicture: request.planPicture } : {}),
   }) as Uint8Array<ArrayBuffer>;
 }
 
@@ -48,6 +81,8 @@ export async function exportTenderPack(options: { working?: boolean } = {}): Pro
     base: import.meta.env.BASE_URL,
   };
   try {
+    const picture = await planRaster(request.doc.plan);
+    if (picture) request.planPicture = picture;
     const bytes = typeof Worker === 'function' ? await inWorker(request) : await onPage(request);
     const name = tenderPackFileName(request.doc);
     download(bytes, name, 'application/pdf');

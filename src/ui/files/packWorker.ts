@@ -6,6 +6,7 @@
 import type { ProjectDocument } from '../../model/types.ts';
 import { solve } from '../../solver/solve.ts';
 import { tenderPackBytes } from '../../export/pdf/tenderPack.ts';
+import type { PlanPicture } from '../../export/pdf/packPlan.ts';
 import { fetchPackFonts } from './packFonts.ts';
 
 export interface PackRequest {
@@ -13,6 +14,8 @@ export interface PackRequest {
   working: boolean;
   /** The app's base URL, for the font files. */
   base: string;
+  /** The site plan picture drawn to a PNG on the page, when the project's is an SVG. */
+  planPicture?: PlanPicture;
 }
 
 export type PackReply = { ok: true; bytes: Uint8Array<ArrayBuffer> } | { ok: false; error: string };
@@ -23,10 +26,13 @@ const scope = self as unknown as {
 };
 
 scope.onmessage = (e) => {
-  const { doc, working, base } = e.data;
+  const { doc, working, base, planPicture } = e.data;
   fetchPackFonts(base)
     .then((fonts) => {
-      const bytes = tenderPackBytes(doc, solve(doc), fonts, { working }) as Uint8Array<ArrayBuffer>;
+      const bytes = tenderPackBytes(doc, solve(doc), fonts, {
+        working,
+        ...(planPicture ? { planPicture } : {}),
+      }) as Uint8Array<ArrayBuffer>;
       scope.postMessage({ ok: true, bytes }, [bytes.buffer]);
     })
     .catch((error: unknown) => {

@@ -13,6 +13,7 @@ export function PackDialog() {
   const close = useEditor((s) => s.closeDialog);
   const elements = useEditor((s) => s.doc.nodes.length + s.doc.cables.length);
   const alternatives = useEditor((s) => s.doc.alternatives.length);
+  const onPlan = useEditor((s) => s.doc.nodes.some((n) => n.plan !== undefined));
   const [working, setWorking] = useState(true);
   if (!open) return null;
   const workingSheets = Math.max(1, Math.round(elements * 0.7));
@@ -61,6 +62,12 @@ export function PackDialog() {
           a summary: project, settings, conductor data, drop limits, standards and editions, methods and
           assumptions, and the cautions;
         </li>
+        {onPlan && (
+          <li>
+            the site plan: the plan picture with each element where it stands and each cable along its
+            measured route;
+          </li>
+        )}
         {alternatives > 0 && (
           <li>
             the design set against each of its {alternatives}{' '}

@@ -86,6 +86,7 @@ describe('the tender pack', () => {
     const firstPageOf = (title: string) => pages.findIndex((p) => p.trimStart().startsWith(title));
     const order = [
       'Single-line diagram',
+      'Site plan',
       'Summary, data and cautions',
       'Cable schedule',
       'Loads',
@@ -98,7 +99,7 @@ describe('the tender pack', () => {
   });
 
   test('the summary names the data, the limits, the standards, the methods and every caution', () => {
-    const summary = flat(pages[1]!);
+    const summary = flat(pages.find((p) => p.trimStart().startsWith('Summary, data and cautions'))!);
     expect(summary).toContain(results.dataSet.title);
     expect(summary).toContain(results.profile.title);
     for (const r of results.references) expect(summary).toContain(flat(r));
@@ -176,6 +177,38 @@ describe('the tender pack', () => {
     const text = pdfPages(tenderPackBytes(alone, solve(alone), packFontsFromDisk(), { working: false }));
     expect(text.some((p) => p.includes('Alternatives compared'))).toBe(false);
     expect(text.some((p) => p.trimStart().startsWith('Summary, data and cautions'))).toBe(true);
+  });
+
+  test('the site plan sheet places every element and labels each sub-main with its measured length', () => {
+    const sheet = flat(pages.find((p) => p.trimStart().startsWith('Site plan'))!);
+    for (const n of doc.nodes) expect(sheet).toContain(n.id);
+    for (const c of doc.cables.filter((x) => doc.nodes.find((n) => n.id === x.to)?.kind !== 'load'))
+      expect(sheet).toContain(`${c.id} ${c.lengthM.toFixed(1)} m`);
+    expect(sheet).toContain('length = |Δx| + |Δy| + allowance, rounded up to 0.1 m');
+    // The demo's picture is SVG, which the pack made outside the editor says it leaves out.
+    expect(sheet).toContain('make the pack in the editor to include it');
+  });
+
+  test('a PNG plan picture is placed on the plan sheet; a project with nothing on a plan has no such sheet', () => {
+    // A 2 × 1 pixel PNG (signature, IHDR, IDAT and IEND chunks, made with zlib).
+    const png =
+      'data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAIAAAABCAIAAAB7QOjdAAAAD0lEQVR4nGM4wcXFdYILAAbJAbkUv7uOAAAAAElFTkSuQmCC';
+    const withPng = { ...doc, alternatives: [], plan: { image: png, widthM: 130 } };
+    const file = join(mkdtempSync(join(tmpdir(), 'dropline-pack-')), 'plan.pdf');
+    writeFileSync(file, tenderPackBytes(withPng, results, packFontsFromDisk(), { working: false }));
+    const images = execFileSync('pdfimages', ['-list', file], { encoding: 'utf8' })
+      .trim()
+      .split('\n')
+      .slice(2);
+    expect(images).toHaveLength(1);
+    expect(images[0]).toMatch(/^\s*2\s+0\s+image\s+2\s+1\s/);
+    const unplaced = {
+      ...doc,
+      alternatives: [],
+      nodes: doc.nodes.map(({ plan: _p, ...n }) => n as typeof n),
+    } as ProjectDocument;
+    const text = pdfPages(tenderPackBytes(unplaced, results, packFontsFromDisk(), { working: false }));
+    expect(text.some((p) => p.trimStart().startsWith('Site plan'))).toBe(false);
   });
 
   test('can leave the working out', () => {
