@@ -45,3 +45,19 @@ export async function screenshot(page: Page, name: string): Promise<void> {
   mkdirSync(ARTIFACTS, { recursive: true });
   await page.screenshot({ path: join(ARTIFACTS, `${name}.png`) });
 }
+
+/** The document text the editor last autosaved (IndexedDB "dropline", store "autosave"). */
+export function readAutosave(page: Page): Promise<string> {
+  return page.evaluate(
+    () =>
+      new Promise<string>((resolve, reject) => {
+        const req = indexedDB.open('dropline', 1);
+        req.onsuccess = () => {
+          const get = req.result.transaction('autosave').objectStore('autosave').get('current');
+          get.onsuccess = () => resolve((get.result as { text: string }).text);
+          get.onerror = () => reject(get.error);
+        };
+        req.onerror = () => reject(req.error);
+      }),
+  );
+}

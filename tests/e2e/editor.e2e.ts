@@ -5,7 +5,7 @@ import { readFileSync, writeFileSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, beforeEach, expect, inject, test } from 'vitest';
-import { openSession, screenshot, type Session } from './browser.ts';
+import { openSession, readAutosave, screenshot, type Session } from './browser.ts';
 import { EditorPage } from './editorPage.ts';
 import { parseDocument } from '../../src/model/parseDocument.ts';
 import { solve } from '../../src/solver/solve.ts';
@@ -40,7 +40,7 @@ test('the demo opens with live cable labels that match the engine', async () => 
   await label.waitFor();
   const lines = label.locator('.ed-edge-line');
   // The reveal zooms in over 300 ms; the full two-line label appears once the zoom reaches it.
-  await expect.poll(() => lines.count(), { timeout: 5000 }).toBe(2);
+  await expect.poll(() => lines.count(), { timeout: 15000 }).toBe(2);
   const [ib, dropV] = await ed.numbersIn(lines.nth(0));
   const [cum, dropPct] = await ed.numbersIn(lines.nth(1));
   const r = results.cables[cable.id]!;
@@ -94,18 +94,7 @@ test('build a small network from the tray with the mouse, set a length, drag, un
 
   // The same network, solved by the engine in Node from the document the editor autosaved.
   await s.page.waitForTimeout(600);
-  const docNow = await s.page.evaluate(
-    () =>
-      new Promise<string>((resolve, reject) => {
-        const req = indexedDB.open('dropline', 1);
-        req.onsuccess = () => {
-          const get = req.result.transaction('autosave').objectStore('autosave').get('current');
-          get.onsuccess = () => resolve((get.result as { text: string }).text);
-          get.onerror = () => reject(get.error);
-        };
-        req.onerror = () => reject(req.error);
-      }),
-  );
+  const docNow = await readAutosave(s.page);
   const parsed = parseDocument(docNow);
   expect(parsed.ok).toBe(true);
   if (!parsed.ok) return;

@@ -4,7 +4,7 @@ import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { afterEach, beforeEach, expect, inject, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openSession, screenshot, type Session } from './browser.ts';
+import { openSession, readAutosave, screenshot, type Session } from './browser.ts';
 import { parseDocument } from '../../src/model/parseDocument.ts';
 import { solve } from '../../src/solver/solve.ts';
 import type { ProjectDocument } from '../../src/model/types.ts';
@@ -337,18 +337,7 @@ test('site plan: dragging a board re-measures its cables while it moves; the eng
 
   // The autosaved document: every cable measured on the plan has the length its route gives,
   // and the details show the engine's figure for a load below the moved board.
-  const text = await page.evaluate(
-    () =>
-      new Promise<string>((resolve, reject) => {
-        const req = indexedDB.open('dropline', 1);
-        req.onsuccess = () => {
-          const get = req.result.transaction('autosave').objectStore('autosave').get('current');
-          get.onsuccess = () => resolve((get.result as { text: string }).text);
-          get.onerror = () => reject(get.error);
-        };
-        req.onerror = () => reject(req.error);
-      }),
-  );
+  const text = await readAutosave(page);
   const parsed = parseDocument(text);
   if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
   const doc = parsed.doc;
