@@ -76,6 +76,14 @@ export const GESTURES: readonly { gesture: string; what: string }[] = [
   { gesture: `${IS_MAC ? '⌘' : 'Ctrl'} + click`, what: 'Add to or remove from the selection' },
   { gesture: 'Drag on empty canvas / wheel', what: 'Pan / zoom' },
   { gesture: 'Right-click', what: 'Actions for the element or the canvas' },
+  {
+    gesture: 'Site plan: drag a board or load',
+    what: 'Move it on the plan; cables measured there change length and every drop updates as it moves',
+  },
+  {
+    gesture: 'Site plan: click a name under “Not on the plan yet”',
+    what: 'Put that element in the middle of the view, to drag where it stands',
+  },
 ];
 
 export function shortcutText(id: ShortcutId): string {
