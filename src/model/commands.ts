@@ -18,7 +18,7 @@ import type {
   Settings,
   SitePlan,
 } from './types.ts';
-import { placeOnPlan, setSitePlan } from './commands/plan.ts';
+import { placeOnPlan, scaleSitePlan, setSitePlan } from './commands/plan.ts';
 import { addNode, moveNodes, updateNode, type NodePatch } from './commands/nodes.ts';
 import { connectCable, updateCable, type CablePatch } from './commands/cables.ts';
 import { deleteElements } from './commands/deleteElements.ts';
@@ -78,7 +78,9 @@ export type Command =
    * that touch them get their new lengths in the same step.
    */
   | { type: 'placeOnPlan'; moves: { id: Id; plan: PlanPoint | null }[] }
-  | { type: 'setSitePlan'; plan: SitePlan | null };
+  | { type: 'setSitePlan'; plan: SitePlan | null }
+  /** A new scale for the plan picture: every plan point moves with it, every measured cable is measured again. */
+  | { type: 'scaleSitePlan'; widthM: number };
 
 export type CommandType = Command['type'];
 
@@ -123,6 +125,8 @@ export function applyCommand(doc: ProjectDocument, command: Command): CommandRes
       return placeOnPlan(doc, command.moves);
     case 'setSitePlan':
       return setSitePlan(doc, command.plan);
+    case 'scaleSitePlan':
+      return scaleSitePlan(doc, command.widthM);
   }
 }
 

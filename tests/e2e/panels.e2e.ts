@@ -362,5 +362,26 @@ test('site plan: dragging a board re-measures its cables while it moves; the eng
 
   await page.getByRole('button', { name: 'Undo' }).click();
   await expect(label.textContent()).resolves.toBe('C28 · 38.0 m');
+
+  // The scale from two points: two clicks on the plan, said to be twice as far apart as they
+  // now measure, double the plan and every measured length with it (DB4's and J1's positions too).
+  await page.getByTestId('plan-scale').click();
+  const pane = (await page.getByTestId('plan-canvas').boundingBox())!;
+  const y = pane.y + 170; // below the plan bar, above the buildings (the schedules drawer is open below)
+  await page.mouse.click(pane.x + 300, y);
+  await page.mouse.click(pane.x + 400, y);
+  const now = Number(
+    /now ([\d.]+) m/.exec((await page.getByTestId('plan-scale-pick').textContent()) ?? '')![1],
+  );
+  expect(now).toBeGreaterThan(0);
+  await page.getByTestId('plan-scale-metres').fill(String(now * 2));
+  await page.getByTestId('plan-scale-apply').click();
+  await expect(page.getByTestId('plan-width').inputValue()).resolves.toMatch(/^26\d/);
+  const doubled = Number(/([\d.]+) m/.exec((await label.textContent()) ?? '')![1]);
+  const allowance = demo().cables.find((c) => c.id === 'C28')!.route!.allowanceM;
+  // 38 m was (distance + allowance); twice the distance plus the same allowance, within a tenth
+  // and the rounding of the two clicks.
+  expect(doubled).toBeGreaterThan(2 * (38 - allowance) + allowance - 1);
+  expect(doubled).toBeLessThan(2 * (38 - allowance) + allowance + 1);
   expect(s.errors).toEqual([]);
 });

@@ -1,5 +1,5 @@
 /** Placing elements on the site plan, and the plan itself. */
-import type { Id, PlanPoint, ProjectDocument, SitePlan } from '../types.ts';
+import type { Id, NodeElement, PlanPoint, ProjectDocument, SitePlan } from '../types.ts';
 import { MAX_PLAN_IMAGE_CHARS, MAX_PLAN_M } from '../schema.ts';
 import { withMeasuredLengths } from '../planLengths.ts';
 import { describeNode } from './describe.ts';
@@ -59,4 +59,38 @@ export function setSitePlan(doc: ProjectDocument, plan: SitePlan | null): Comman
       `The site plan's width must be a positive number of metres up to ${MAX_PLAN_M}; got ${plan.widthM}.`,
     );
   return ok({ ...doc, plan: { image: plan.image, widthM: plan.widthM } });
+}
+
+function scaled(nodes: NodeElement[], factor: number): NodeElement[] {
+  // To the millimetre, so a rescale leaves no float noise in the file.
+  const mm = (v: number) => Math.round(v * factor * 1000) / 1000;
+  return nodes.map((n) => (n.plan ? { ...n, plan: { xM: mm(n.plan.xM), yM: mm(n.plan.yM) } } : n));
+}
+
+/**
+ * Gives the plan picture a new width in metres (its scale) and moves every plan point with it,
+ * in the current design and in every alternative, so each element stays on the same spot of the
+ * picture; every cable measured on the plan is measured again. One undo step.
+ */
+export function scaleSitePlan(doc: ProjectDocument, widthM: number): CommandResult {
+  if (!doc.plan) return fail('There is no site plan picture to scale; load one first.');
+  if (!(Number.isFinite(widthM) && widthM > 0 && widthM <= MAX_PLAN_M))
+    return fail(
+      `The site plan's width must be a positive number of metres up to ${MAX_PLAN_M}; got ${widthM}.`,
+    );
+  const factor = widthM / doc.plan.widthM;
+  if (factor === 1) return ok(doc);
+  const outside = [doc.nodes, ...doc.alternatives.map((a) => a.nodes)]
+    .flat()
+    .find(
+      (n) =>
+        n.plan && (Math.abs(n.plan.xM * factor) > MAX_PLAN_M || Math.abs(n.plan.yM * factor) > MAX_PLAN_M),
+    );
+  if (outside) return fail(`${describeNode(outside)} would lie beyond ±${MAX_PLAN_M} m at that scale.`);
+  const current = withMeasuredLengths({ ...doc, nodes: scaled(doc.nodes, factor) });
+  const alternatives = doc.alternatives.map((alt) => {
+    const measured = withMeasuredLengths({ ...doc, nodes: scaled(alt.nodes, factor), cables: alt.cables });
+    return { ...alt, nodes: measured.nodes, cables: measured.cables };
+  });
+  return ok({ ...current, alternatives, plan: { ...doc.plan, widthM } });
 }

@@ -41,7 +41,73 @@ function toPoint(x: number, y: number): PlanPoint {
   return { xM: r((x + MARKER / 2) / PX_PER_M), yM: r((y + MARKER / 2) / PX_PER_M) };
 }
 
-function PlanBar() {
+/** Two clicks on the plan and the real distance between them: the plan's scale, the usual way. */
+export interface ScalePick {
+  points: { x: number; y: number }[];
+}
+
+function ScaleByPoints({ pick, onPick }: { pick: ScalePick | null; onPick: (p: ScalePick | null) => void }) {
+  const doc = useEditor((s) => s.doc);
+  const dispatch = useEditor((s) => s.dispatch);
+  const [metres, setMetres] = useState('');
+  if (!doc.plan) return null;
+  if (!pick)
+    return (
+      <button
+        type="button"
+        data-testid="plan-scale"
+        title="Click the two ends of a dimension you know on the plan (a wall, a grid line, the scale bar), then give its length"
+        onClick={() => {
+          setMetres('');
+          onPick({ points: [] });
+        }}
+      >
+        Set the scale from two points…
+      </button>
+    );
+  const [a, b] = pick.points;
+  const measuredM = a && b ? Math.hypot(b.x - a.x, b.y - a.y) / PX_PER_M : null;
+  const real = Number(metres);
+  const usable =
+    measuredM !== null && measuredM > 0 && metres.trim() !== '' && Number.isFinite(real) && real > 0;
+  return (
+    <span className="pl-scale" data-testid="plan-scale-pick">
+      {measuredM === null ? (
+        <span>Click {a ? 'the other end' : 'one end'} of a dimension you know on the plan.</span>
+      ) : (
+        <label>
+          The two points are{' '}
+          <input
+            value={metres}
+            autoFocus
+            onChange={(e) => setMetres(e.target.value)}
+            className="pl-short"
+            data-testid="plan-scale-metres"
+          />{' '}
+          m apart (now {measuredM.toFixed(2)} m)
+        </label>
+      )}
+      <button
+        type="button"
+        className="dl-primary"
+        disabled={!usable}
+        data-testid="plan-scale-apply"
+        onClick={() => {
+          if (!usable || !doc.plan || measuredM === null) return;
+          const out = dispatch({ type: 'scaleSitePlan', widthM: (doc.plan.widthM * real) / measuredM });
+          if (out.ok) onPick(null);
+        }}
+      >
+        Apply
+      </button>
+      <button type="button" onClick={() => onPick(null)}>
+        Cancel
+      </button>
+    </span>
+  );
+}
+
+function PlanBar({ pick, onPick }: { pick: ScalePick | null; onPick: (p: ScalePick | null) => void }) {
   const doc = useEditor((s) => s.doc);
   const selection = useEditor((s) => s.selection);
   const dispatch = useEditor((s) => s.dispatch);
@@ -107,8 +173,7 @@ function PlanBar() {
               data-testid="plan-width"
               onBlur={(e) => {
                 const widthM = Number(e.target.value);
-                if (doc.plan && widthM !== doc.plan.widthM)
-                  dispatch({ type: 'setSitePlan', plan: { image: doc.plan.image, widthM } });
+                if (doc.plan && widthM !== doc.plan.widthM) dispatch({ type: 'scaleSitePlan', widthM });
               }}
               onKeyDown={(e) => {
                 if (e.key === 'Enter') (e.target as HTMLInputElement).blur();
@@ -117,6 +182,7 @@ function PlanBar() {
             m
           </label>
         )}
+        <ScaleByPoints pick={pick} onPick={onPick} />
         <span className="pl-sep" />
         <label title="Added to each measured length for rises, drops and terminations">
           Allowance{' '}
@@ -181,6 +247,7 @@ function PlanView() {
   const results = useEditor((s) => s.results);
   const selection = useEditor((s) => s.selection);
   const [drag, setDrag] = useState<Record<Id, PlanPoint> | null>(null);
+  const [pick, setPick] = useState<ScalePick | null>(null);
   const flow = useReactFlow();
   // Fit and 1:1 from the top bar and the keyboard act on the plan while it is shown. A part added
   // from the tray still goes onto the diagram (near its top), to be placed on the plan from here.
@@ -256,7 +323,12 @@ function PlanView() {
         edgeTypes={edgeTypes}
         onNodesChange={onNodesChange}
         onEdgeClick={(_e, edge) => editorStore.getState().setSelection([edge.id])}
-        onPaneClick={() => editorStore.getState().setSelection([])}
+        onPaneClick={(e) => {
+          if (pick && pick.points.length < 2) {
+            const p = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
+            setPick({ points: [...pick.points, p] });
+          } else editorStore.getState().setSelection([]);
+        }}
         onNodeDragStop={onNodeDragStop}
         nodesConnectable={false}
         deleteKeyCode={null}
@@ -268,7 +340,7 @@ function PlanView() {
       >
         <Background variant={BackgroundVariant.Lines} gap={PX_PER_M * 5} color="#eef1f3" />
         <Controls showInteractive={false} position="bottom-left" />
-        <PlanBar />
+        <PlanBar pick={pick} onPick={setPick} />
       </ReactFlow>
     </div>
   );

@@ -109,6 +109,24 @@ describe('lengths measured on the site plan', () => {
     ]);
   });
 
+  test('a new scale moves every plan point with the picture and measures again, alternatives too', () => {
+    let doc = run(placed(), { type: 'setSitePlan', plan: { image: PIXEL, widthM: 40 } });
+    doc = run(doc, { type: 'keepAlternative', name: 'Kept', note: '', keptAt: '2025-02-03T09:30:00.000Z' });
+    const scaled = run(doc, { type: 'scaleSitePlan', widthM: 60 });
+    expect(scaled.plan!.widthM).toBe(60);
+    expect(scaled.nodes.find((n) => n.id === 'DB1')!.plan).toEqual({ xM: 18, yM: 7.5 });
+    // C1: (18 + 7.5) + 3 = 28.5 m; C2: (12 + 6) + 2.04 = 20.04 → 20.1 m.
+    expect(cable(scaled, 'C1').lengthM).toBe(28.5);
+    expect(cable(scaled, 'C2').lengthM).toBe(20.1);
+    const alt = scaled.alternatives[0]!;
+    expect(alt.nodes.find((n) => n.id === 'DB1')!.plan).toEqual({ xM: 18, yM: 7.5 });
+    expect(alt.cables.find((c) => c.id === 'C1')!.lengthM).toBe(28.5);
+    const none = applyCommand(placed(), { type: 'scaleSitePlan', widthM: 60 });
+    expect(!none.ok && none.error).toMatch(/no site plan picture to scale/);
+    const bad = applyCommand(doc, { type: 'scaleSitePlan', widthM: -1 });
+    expect(!bad.ok && bad.error).toMatch(/positive number of metres/);
+  });
+
   test('the working says a length was measured on the plan', async () => {
     const { solve } = await import('../../../src/solver/solve.ts');
     const r = solve(placed());
