@@ -90,6 +90,12 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
     col('from', 'From', 'Sending end (towards the supply)', false),
     col('to', 'To', 'Receiving end', false),
     col('length', 'Length m', 'Route length, one way, metres'),
+    col(
+      'lengthFrom',
+      'Length from',
+      'Where the length comes from: measured on the site plan (along x, then y) plus the allowance shown, or typed',
+      false,
+    ),
     col('size', 'Size mm²', 'Line conductor / cpc cross-section, mm² (arm.: the armour is the cpc)'),
     col('phases', 'Ph', 'Phases carried'),
     col('device', 'Device', 'Protective device at the sending end', false),
@@ -130,6 +136,7 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
         from: txt(nameOf(nodes, c.from)),
         to: txt(nameOf(nodes, c.to)),
         length: num(c.lengthM, 1),
+        lengthFrom: txt(c.route ? `plan + ${c.route.allowanceM} m` : 'typed'),
         size: {
           sort: c.sizeMm2,
           // An SWA cable's "cpc" is its armour, whose cross-section is much larger than the cores':
