@@ -11,6 +11,7 @@ import type { Alternative, Cable, NodeElement, ProjectDocument } from './types.t
 import { FORMAT_ID } from './types.ts';
 import { safeJsonParse } from './safeJson.ts';
 import { migrate } from './migrations.ts';
+import { measureOnPlan } from './planLengths.ts';
 import type * as z from 'zod';
 import { alternativeSchema, alternativesListSchema, documentSchema, MAX_ELEMENTS } from './schema.ts';
 import { describeElement, issueMessage, valueAt } from './issueText.ts';
@@ -210,6 +211,15 @@ function softChecks(doc: ProjectDocument): string[] {
   const warnings: string[] = [];
   for (const c of doc.cables) {
     if (c.lengthM === 0) warnings.push(`cable ${c.id}: lengthM is 0; enter the route length in metres`);
+  }
+  // A length measured on the plan that no longer matches it (a hand edit): read as written, said.
+  const byId = new Map(doc.nodes.map((n) => [n.id, n]));
+  for (const c of doc.cables) {
+    const m = measureOnPlan(c, byId);
+    if (m && Math.abs(m.lengthM - c.lengthM) > 0.05)
+      warnings.push(
+        `cable ${c.id}: lengthM is ${c.lengthM} m but its route on the site plan measures ${m.lengthM} m (${m.distanceM} m + ${m.allowanceM} m allowance); the file's length is used until the cable is edited or an end moved on the plan`,
+      );
   }
   return warnings;
 }

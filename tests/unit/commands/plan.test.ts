@@ -127,6 +127,16 @@ describe('lengths measured on the site plan', () => {
     expect(!bad.ok && bad.error).toMatch(/positive number of metres/);
   });
 
+  test('a file whose measured length no longer matches its plan opens as written, with a warning', () => {
+    const raw = JSON.parse(serializeDocument(placed()));
+    raw.cables.find((c: { id: string }) => c.id === 'C1').lengthM = 25;
+    const r = parseDocument(JSON.stringify(raw));
+    expect(r.ok && cable(r.doc, 'C1').lengthM).toBe(25);
+    expect(r.ok && r.warnings).toEqual([
+      "cable C1: lengthM is 25 m but its route on the site plan measures 20 m (17 m + 3 m allowance); the file's length is used until the cable is edited or an end moved on the plan",
+    ]);
+  });
+
   test('the working says a length was measured on the plan', async () => {
     const { solve } = await import('../../../src/solver/solve.ts');
     const r = solve(placed());
