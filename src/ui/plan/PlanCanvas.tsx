@@ -116,6 +116,7 @@ function PlanBar({ pick, onPick }: { pick: ScalePick | null; onPick: (p: ScalePi
   const file = useRef<HTMLInputElement>(null);
   const [allowance, setAllowance] = useState('2');
   const unplaced = doc.nodes.filter((n) => !n.plan);
+  const selectedPlaced = doc.nodes.filter((n) => n.plan && selection.includes(n.id));
   const placedIds = new Set(doc.nodes.filter((n) => n.plan).map((n) => n.id));
   const measurable = doc.cables.filter((c) => placedIds.has(c.from) && placedIds.has(c.to));
   // With a selection, the selected cables (a new allowance for measured ones too); without, only
@@ -216,6 +217,21 @@ function PlanBar({ pick, onPick }: { pick: ScalePick | null; onPick: (p: ScalePi
             : `Measure the cables not measured yet (${chosen.length})`}
         </button>
       </div>
+      {selectedPlaced.length > 0 && (
+        <div className="pl-row">
+          <button
+            type="button"
+            data-testid="plan-unplace"
+            title="The element stays in the design; cables measured to it keep their last length until it is placed again"
+            onClick={() =>
+              dispatch({ type: 'placeOnPlan', moves: selectedPlaced.map((n) => ({ id: n.id, plan: null })) })
+            }
+          >
+            Take {selectedPlaced.length === 1 ? selectedPlaced[0]!.id : `${selectedPlaced.length} elements`}{' '}
+            off the plan
+          </button>
+        </div>
+      )}
       {unplaced.length > 0 && (
         <div className="pl-row pl-unplaced" data-testid="plan-unplaced">
           <span>Not on the plan yet ({unplaced.length}):</span>
