@@ -1,5 +1,5 @@
+import { lazy, Suspense } from 'react';
 import { Canvas } from './canvas/Canvas.tsx';
-import { PlanCanvas } from './plan/PlanCanvas.tsx';
 import { useEditor } from '../store/editorStore.ts';
 import { Tray } from './tray/Tray.tsx';
 import { TopBar } from './chrome/TopBar.tsx';
@@ -16,9 +16,14 @@ import { ProjectDialog } from './panels/ProjectDialog.tsx';
 import { SettingsDialog } from './panels/SettingsDialog.tsx';
 import { CautionsDialog } from './panels/CautionsDialog.tsx';
 import { PackDialog } from './panels/PackDialog.tsx';
-import { AlternativesDialog } from './panels/AlternativesDialog.tsx';
 import { HelpOverlay } from './panels/HelpOverlay.tsx';
 import { SizingDialog } from './panels/SizingDialog.tsx';
+
+// The site plan and the alternatives load when first opened, so the editor starts without them.
+const PlanCanvas = lazy(() => import('./plan/PlanCanvas.tsx').then((m) => ({ default: m.PlanCanvas })));
+const AlternativesDialog = lazy(() =>
+  import('./panels/AlternativesDialog.tsx').then((m) => ({ default: m.AlternativesDialog })),
+);
 
 function onWindowDragOver(e: React.DragEvent) {
   if (e.dataTransfer.types.includes('Files')) {
@@ -37,13 +42,20 @@ function onWindowDrop(e: React.DragEvent) {
 export function App() {
   useShortcuts();
   const canvasView = useEditor((s) => s.view.canvas);
+  const alternativesOpen = useEditor((s) => s.view.dialog === 'alternatives');
   return (
     <main className="ed-app" data-testid="app" onDragOver={onWindowDragOver} onDrop={onWindowDrop}>
       <TopBar />
       <div className="ed-body">
         <Tray />
         <div className="ed-centre">
-          {canvasView === 'plan' ? <PlanCanvas /> : <Canvas />}
+          {canvasView === 'plan' ? (
+            <Suspense fallback={<div className="ed-loading">Opening the site plan…</div>}>
+              <PlanCanvas />
+            </Suspense>
+          ) : (
+            <Canvas />
+          )}
           <LabelModeBar />
           <StatusKey />
           <NoticeBar />
@@ -56,7 +68,11 @@ export function App() {
       <SettingsDialog />
       <CautionsDialog />
       <PackDialog />
-      <AlternativesDialog />
+      {alternativesOpen && (
+        <Suspense fallback={null}>
+          <AlternativesDialog />
+        </Suspense>
+      )}
       <HelpOverlay />
       <SizingDialog />
       <FileProblemDialog />
