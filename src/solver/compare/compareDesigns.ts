@@ -255,7 +255,8 @@ function cableFacts(c: Cable, results: Results): CableFacts {
   };
 }
 
-function summarise(side: DesignSide): DesignSummary {
+/** One design's totals: loads by status, worst load, findings, failed checks, conductor metal. */
+export function summariseDesign(side: DesignSide): DesignSummary {
   const loads: Record<StatusOrUnsolved, number> = { within: 0, close: 0, over: 0, unsolved: 0 };
   let worst: DesignSummary['worst'] = null;
   for (const n of side.doc.nodes) {
@@ -405,8 +406,8 @@ export function compareDesigns(a: DesignSide, b: DesignSide): DesignComparison {
   }
 
   return {
-    a: summarise(a),
-    b: summarise(b),
+    a: summariseDesign(a),
+    b: summariseDesign(b),
     settings: settingsChanges(a.doc.settings, b.doc.settings),
     loads,
     cables,

@@ -11,6 +11,7 @@ import { fetchPackFonts } from './packFonts.ts';
 import type { PackReply, PackRequest } from './packWorker.ts';
 import type { PlanPicture } from '../../export/pdf/packPlan.ts';
 import type { SitePlan } from '../../model/types.ts';
+import { drawPicture } from '../plan/planPicture.ts';
 
 /** Longest side of the plan picture in the pack, pixels: sharp on A3 without a heavy file. */
 const PLAN_RASTER_PX = 2400;
@@ -22,20 +23,7 @@ const PLAN_RASTER_PX = 2400;
 async function planRaster(plan: SitePlan | undefined): Promise<PlanPicture | null> {
   if (!plan || !plan.image.startsWith('data:image/svg+xml')) return null;
   try {
-    const img = new Image();
-    img.src = plan.image;
-    await img.decode();
-    const w0 = img.naturalWidth || 1200;
-    const h0 = img.naturalHeight || 800;
-    const k = PLAN_RASTER_PX / Math.max(w0, h0);
-    const canvas = document.createElement('canvas');
-    canvas.width = Math.round(w0 * k);
-    canvas.height = Math.round(h0 * k);
-    const g = canvas.getContext('2d');
-    if (!g) return null;
-    g.fillStyle = '#ffffff';
-    g.fillRect(0, 0, canvas.width, canvas.height);
-    g.drawImage(img, 0, 0, canvas.width, canvas.height);
+    const { canvas } = await drawPicture(plan.image, PLAN_RASTER_PX, true);
     return { dataUrl: canvas.toDataURL('image/png'), widthPx: canvas.width, heightPx: canvas.height };
   } catch {
     return null;

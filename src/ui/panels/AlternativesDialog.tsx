@@ -2,8 +2,8 @@ import { useMemo, useState } from 'react';
 import { useEditor } from '../../store/editorStore.ts';
 import { alternativeNameProblem } from '../../model/commands/alternatives.ts';
 import { MAX_ALTERNATIVES } from '../../model/schema.ts';
-import type { DesignSide } from '../../solver/compare/compareDesigns.ts';
-import { metalTotals } from '../../solver/compare/conductorMetal.ts';
+import { summariseDesign, type DesignSummary } from '../../solver/compare/compareDesigns.ts';
+
 import { fmt } from '../../export/format.ts';
 import { statusLook } from '../../export/statusLook.ts';
 import { Dialog } from './Dialog.tsx';
@@ -29,12 +29,8 @@ export function AlternativesDialog() {
   return <Alternatives />;
 }
 
-function LoadCounts({ side }: { side: DesignSide }) {
-  const counts = { within: 0, close: 0, over: 0 };
-  for (const n of side.doc.nodes) {
-    const status = n.kind === 'load' ? side.results.loads[n.id]?.status : null;
-    if (status) counts[status]++;
-  }
+function LoadCounts({ summary }: { summary: DesignSummary }) {
+  const counts = summary.loads;
   return (
     <span className="dl-alt-counts">
       {(['within', 'close', 'over'] as const).map((s) => {
@@ -62,8 +58,11 @@ function Alternatives() {
   const [keepAs, setKeepAs] = useState('');
   const [renaming, setRenaming] = useState<{ from: string; to: string; note: string } | null>(null);
 
-  const sides = useMemo(() => doc.alternatives.map((a) => alternativeSide(doc, a)), [doc]);
-  const canvasSide: DesignSide = { label: CANVAS_LABEL, doc, results };
+  const summaries = useMemo(
+    () => doc.alternatives.map((a) => summariseDesign(alternativeSide(doc, a))),
+    [doc],
+  );
+  const canvasSummary = useMemo(() => summariseDesign({ label: CANVAS_LABEL, doc, results }), [doc, results]);
   const problem = alternativeNameProblem(doc, name);
   const full = doc.alternatives.length >= MAX_ALTERNATIVES;
 
@@ -184,13 +183,13 @@ function Alternatives() {
             </td>
             <td>–</td>
             <td>
-              <LoadCounts side={canvasSide} />
+              <LoadCounts summary={canvasSummary} />
             </td>
-            <td className="dl-num">{fmt(metalTotals(doc.cables).copperKg)} kg</td>
+            <td className="dl-num">{fmt(canvasSummary.metal.copperKg)} kg</td>
             <td />
           </tr>
           {doc.alternatives.map((alt, k) => {
-            const side = sides[k] as DesignSide;
+            const summary = summaries[k] as DesignSummary;
             const editing = renaming?.from === alt.name;
             return (
               <tr key={alt.name} data-testid={`alt-row-${k}`}>
@@ -217,9 +216,9 @@ function Alternatives() {
                 </td>
                 <td>{keptText(alt.keptAt)}</td>
                 <td>
-                  <LoadCounts side={side} />
+                  <LoadCounts summary={summary} />
                 </td>
-                <td className="dl-num">{fmt(metalTotals(alt.cables).copperKg)} kg</td>
+                <td className="dl-num">{fmt(summary.metal.copperKg)} kg</td>
                 <td className="dl-alt-actions">
                   {editing ? (
                     <>

@@ -17,6 +17,33 @@ function asDataUrl(file: Blob): Promise<string> {
   });
 }
 
+/**
+ * The picture at `url` drawn on white on a canvas with its long side `maxSide` pixels (made
+ * smaller only, unless `grow`); `scale` is what it was drawn at.
+ */
+export async function drawPicture(
+  url: string,
+  maxSide: number,
+  grow: boolean,
+): Promise<{ canvas: HTMLCanvasElement; scale: number }> {
+  const img = new Image();
+  img.src = url;
+  await img.decode();
+  const w0 = img.naturalWidth || 1200;
+  const h0 = img.naturalHeight || 800;
+  const fit = maxSide / Math.max(w0, h0);
+  const scale = grow ? fit : Math.min(1, fit);
+  const canvas = document.createElement('canvas');
+  canvas.width = Math.max(1, Math.round(w0 * scale));
+  canvas.height = Math.max(1, Math.round(h0 * scale));
+  const g = canvas.getContext('2d');
+  if (!g) throw new Error('The picture could not be drawn in this browser.');
+  g.fillStyle = '#ffffff';
+  g.fillRect(0, 0, canvas.width, canvas.height);
+  g.drawImage(img, 0, 0, canvas.width, canvas.height);
+  return { canvas, scale };
+}
+
 export async function readPlanPicture(file: File): Promise<string> {
   if (!/^image\/(png|jpeg|svg\+xml)$/.test(file.type))
     throw new Error(
@@ -30,15 +57,8 @@ export async function readPlanPicture(file: File): Promise<string> {
       );
     return url;
   }
-  const img = new Image();
-  img.src = url;
-  await img.decode();
-  const scale = Math.min(1, MAX_SIDE / Math.max(img.naturalWidth, img.naturalHeight));
+  const { canvas, scale } = await drawPicture(url, MAX_SIDE, false);
   if (scale === 1 && url.length <= MAX_PLAN_IMAGE_CHARS) return url;
-  const canvas = document.createElement('canvas');
-  canvas.width = Math.max(1, Math.round(img.naturalWidth * scale));
-  canvas.height = Math.max(1, Math.round(img.naturalHeight * scale));
-  canvas.getContext('2d')?.drawImage(img, 0, 0, canvas.width, canvas.height);
   const out = canvas.toDataURL(file.type === 'image/png' ? 'image/png' : 'image/jpeg', 0.85);
   if (out.length > MAX_PLAN_IMAGE_CHARS) return canvas.toDataURL('image/jpeg', 0.7);
   return out;
