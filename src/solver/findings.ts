@@ -63,5 +63,52 @@ let _firstChars = 0;
  * hands the garbage collector correspondingly less to copy. The text is unchanged.
  */
 export function flattenMessages(findings: readonly Finding[], from = 0): void {
-  for (let k = from; k < findings.length; k++) _firstChars ^= findings[k]!.message.charCodeAt(0);
+  for (let k = from; k < findings.length; k++) {
+    const f = findings[k]!;
+    // A lazy finding has no message yet; reading it here would make it.
+    if (!(f instanceof LazyFinding)) _firstChars ^= f.message.charCodeAt(0);
+  }
+}
+
+/**
+ * A finding whose message is put together when first read, by `make` from `args`: a large solve
+ * with thousands of failed checks then makes no text until someone reads it, and holds a few
+ * references instead of a string meanwhile. `message` reads like a plain property and JSON carries
+ * it (toJSON).
+ * @example new LazyFinding('ibOverIn', 'error', 'C1', (a: number) => `Ib ${a} A`, [40]).message // 'Ib 40 A'
+ */
+export class LazyFinding<A extends unknown[] = unknown[], C extends string = string> implements Finding {
+  readonly code: C;
+  readonly severity: Finding['severity'];
+  readonly elementId: string;
+  #make: ((...args: A) => string) | undefined;
+  #args: A | undefined;
+  #text = '';
+
+  constructor(
+    code: C,
+    severity: Finding['severity'],
+    elementId: string,
+    make: (...args: A) => string,
+    args: A,
+  ) {
+    this.code = code;
+    this.severity = severity;
+    this.elementId = elementId;
+    this.#make = make;
+    this.#args = args;
+  }
+
+  get message(): string {
+    if (this.#make) {
+      this.#text = this.#make(...(this.#args as A));
+      this.#make = undefined;
+      this.#args = undefined;
+    }
+    return this.#text;
+  }
+
+  toJSON(): Finding {
+    return { code: this.code, severity: this.severity, elementId: this.elementId, message: this.message };
+  }
 }

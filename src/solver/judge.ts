@@ -7,7 +7,7 @@
 import { longRunAllowancePct } from '../catalogue/limits.ts';
 import type { DropState } from './dropState.ts';
 import { KIND_BOARD, KIND_LOAD } from './dropState.ts';
-import { flattenMessages, shown } from './findings.ts';
+import { LazyFinding, shown } from './findings.ts';
 import { nodeLabel } from './topology.ts';
 import { FindingTail } from './findingOrder.ts';
 
@@ -93,6 +93,24 @@ export function judged(s: DropState, v: number): LoadVerdict {
   return out;
 }
 
+/** The over-limit message, made when first read. */
+function overText(
+  s: DropState,
+  v: number,
+  worstPct: number,
+  category: string,
+  limit: number,
+  branchWorst: number,
+): string {
+  const branchLimit = s.profile.branchPct;
+  return `${nodeLabel(s, v)}: drop from the origin ${worstPct.toFixed(2)} % of U0 is over its ${category} limit of ${limit.toFixed(2)} %${branchLimit !== undefined ? ` (or its branch drop ${branchWorst.toFixed(2)} % is over ${branchLimit} %)` : ''}; use a larger cable on the path or shorten it.`;
+}
+
+/** The close-to-limit message, made when first read. */
+function closeText(s: DropState, v: number, used: number, worstPct: number, limit: number): string {
+  return `${nodeLabel(s, v)}: uses ${(used * 100).toFixed(0)} % of its drop budget (${worstPct.toFixed(2)} % of U0 against ${limit.toFixed(2)} %).`;
+}
+
 export function judgeLoads(s: DropState): void {
   const { findings, profile } = s;
   const pctPerV = 100 / s.u0V;
@@ -143,23 +161,28 @@ export function judgeLoads(s: DropState): void {
             slackB[b + p] = branchLimit - ((cum[b + p] as number) - (cum[bb + p] as number)) * pctPerV;
         }
         if (code === 2)
-          findings.push({
-            code: 'overLimit',
-            severity: 'error',
-            elementId: s.nodeIds.at(v),
-            message: `${nodeLabel(s, v)}: drop from the origin ${worstPct.toFixed(2)} % of U0 is over its ${category} limit of ${limit.toFixed(2)} %${branchLimit !== undefined ? ` (or its branch drop ${branchWorst.toFixed(2)} % is over ${branchLimit} %)` : ''}; use a larger cable on the path or shorten it.`,
-          });
+          findings.push(
+            new LazyFinding('overLimit', 'error', s.nodeIds.at(v), overText, [
+              s,
+              v,
+              worstPct,
+              category,
+              limit,
+              branchWorst,
+            ]),
+          );
         else if (code === 1)
-          findings.push({
-            code: 'closeToLimit',
-            severity: 'warning',
-            elementId: s.nodeIds.at(v),
-            message: `${nodeLabel(s, v)}: uses ${(used * 100).toFixed(0)} % of its drop budget (${worstPct.toFixed(2)} % of U0 against ${limit.toFixed(2)} %).`,
-          });
+          findings.push(
+            new LazyFinding('closeToLimit', 'warning', s.nodeIds.at(v), closeText, [
+              s,
+              v,
+              used,
+              worstPct,
+              limit,
+            ]),
+          );
       }
     }
-    // Each message joined while its parts are still in cache (see flattenMessages).
-    if (findings.length > tail.seenCount) flattenMessages(findings, tail.seenCount);
     tail.tag(v);
     const j = parentCable[v] as number;
     if (v === root || j < 0) continue;

@@ -1,8 +1,9 @@
 /**
  * The checks of one segment and of its far node, decided from the pass arrays as the walk reaches
  * them (protectionPass.ts). A check that fails or cannot be assessed becomes a finding with the
- * message the check object would carry (the same message functions); passing checks cost no
- * string, and the node is read only to name it in a message. Findings are then put in
+ * message the check object would carry (the same message functions), made when the message is
+ * first read (LazyFinding); passing checks cost no string, and the node is read only to name it in
+ * a message. Findings are then put in
  * breadth-first order (each cable's, then its far node's), the order the checks are listed in.
  */
 import type { Cable, Device, Load } from '../../model/types.ts';
@@ -20,7 +21,7 @@ import {
   requiredDisconnectionS,
 } from './disconnection.ts';
 import { FAIL_CODES } from './protectionWorking.ts';
-import { flattenMessages } from '../findings.ts';
+import { flattenMessages, LazyFinding } from '../findings.ts';
 import { cableLabel } from '../elementLabel.ts';
 import type { CapacityMemo, ConductorFigures } from './capacityMemo.ts';
 import { KIND_LOAD, type TreeInputs } from './treeInputs.ts';
@@ -29,6 +30,26 @@ import { motorStartFor } from '../motorStart.ts';
 import { hypot } from '../hypot.ts';
 import { faultMaxA, nodeName, type Loops, type PassArrays } from './passArrays.ts';
 import type { PassContext, SegmentLoops } from './protectionPass.ts';
+
+// The message makers of the checks, each naming its element when the message is first read.
+type NodeEl = TreeInputs['nodes'][number] | undefined;
+const ibInText = (c: Cable, ibA: number, inA: number) => msg.ibInFailMessage(cableLabel(c), ibA, inA);
+const capacityText = (c: Cable, error: string) => msg.capacityErrorMessage(cableLabel(c), error);
+const inIzText = (c: Cable, label: string, base: number, izA: number) =>
+  msg.inIzFailMessage(cableLabel(c), label, base, izA);
+const i2Text = (c: Cable, i2: number, lim: number) => msg.i2FailMessage(cableLabel(c), i2, lim);
+const breakingText = (c: Cable, kA: number, breakingKa: number) =>
+  msg.breakingFailMessage(cableLabel(c), kA, msg.sendingEnd(cableLabel(c)), breakingKa);
+const cpcUnknownText = (c: Cable, why: string) => msg.cpcNotAssessedMessage(cableLabel(c), why);
+const cpcText = (c: Cable, cpcMm2: number, sMin: number) => msg.cpcFailMessage(cableLabel(c), cpcMm2, sMin);
+const zsNoDeviceText = (n: NodeEl, id: string) => zsMsg.zsNoDeviceMessage(nodeName(n, id));
+const zsIaText = (n: NodeEl, id: string, error: string) => zsMsg.zsIaErrorMessage(nodeName(n, id), error);
+const zsText = (n: NodeEl, id: string, zsOhm: number, zsMax: number, requiredS: number) =>
+  zsMsg.zsFailMessage(nodeName(n, id), zsOhm, zsMax, requiredS);
+const ttNoRcdText = (n: NodeEl, id: string) => zsMsg.ttNoRcdMessage(nodeName(n, id));
+const ttNoRaText = (n: NodeEl, id: string) => zsMsg.ttNoRaMessage(nodeName(n, id));
+const ttText = (n: NodeEl, id: string, volts: number) => zsMsg.ttFailMessage(nodeName(n, id), volts);
+const checkText = (check: Check) => check.message;
 
 /** Where the fuse data or the required time give no Ia (operatingCurrent answers with a reason). */
 export function iaUnknown(device: Device, requiredS: number, fuses: FuseDataSet): boolean {
@@ -75,13 +96,28 @@ export class Tagged {
   };
   failed = 0;
   unassessed = 0;
-  fail(place: number, key: CheckKey, elementId: string, message: string): void {
+  /** A failed check; its message is made from `args` when first read (see LazyFinding). */
+  fail<A extends unknown[]>(
+    place: number,
+    key: CheckKey,
+    elementId: string,
+    make: (...args: A) => string,
+    ...args: A
+  ): void {
     this.failed++;
-    this.push(place, { code: FAIL_CODES[key], severity: 'error', elementId, message });
+    this.list.push(new LazyFinding(FAIL_CODES[key], 'error', elementId, make, args));
+    this.tags.push(place);
   }
-  unknown(place: number, elementId: string, message: string): void {
+  /** A check that cannot be assessed; its message is made as fail's is. */
+  unknown<A extends unknown[]>(
+    place: number,
+    elementId: string,
+    make: (...args: A) => string,
+    ...args: A
+  ): void {
     this.unassessed++;
-    this.push(place, { code: 'checkNotAssessed', severity: 'warning', elementId, message });
+    this.list.push(new LazyFinding('checkNotAssessed', 'warning', elementId, make, args));
+    this.tags.push(place);
   }
   push(place: number, f: Finding): void {
     this.list.push(f);
@@ -149,19 +185,18 @@ export function cableFindings(
     );
   }
   const ibA = t.drop ? cableIbA(t.drop, j) : t.ibA(j);
-  if (device && !(ibA <= inA)) out.fail(tag, 'ibIn', id, msg.ibInFailMessage(cableLabel(cable), ibA, inA));
+  if (device && !(ibA <= inA)) out.fail(tag, 'ibIn', id, ibInText, cable, ibA, inA);
   const cap = memo.list[a.capAt[j]!]!;
   if ('error' in cap) {
-    out.unknown(tag, id, msg.capacityErrorMessage(cableLabel(cable), cap.error));
+    out.unknown(tag, id, capacityText, cable, cap.error);
   } else {
     const izA = cap.izA;
     const base = device ? inA : ibA;
-    if (!(base <= izA))
-      out.fail(tag, 'inIz', id, msg.inIzFailMessage(cableLabel(cable), device ? 'In' : 'Ib', base, izA));
+    if (!(base <= izA)) out.fail(tag, 'inIz', id, inIzText, cable, device ? 'In' : 'Ib', base, izA);
     if (device) {
       const i2 = conventionalOperatingMultiple(device.type, inA) * inA;
       const lim = 1.45 * izA;
-      if (!(i2 <= lim)) out.fail(tag, 'i2', id, msg.i2FailMessage(cableLabel(cable), i2, lim));
+      if (!(i2 <= lim)) out.fail(tag, 'i2', id, i2Text, cable, i2, lim);
     }
   }
   const own = cable.device;
@@ -173,13 +208,7 @@ export function cableFindings(
       kA = faultMaxA(a, u, u0V) / 1000;
       a.sendingKa[r] = kA;
     }
-    if (!(own.breakingKa >= kA))
-      out.fail(
-        tag,
-        'breaking',
-        id,
-        msg.breakingFailMessage(cableLabel(cable), kA, msg.sendingEnd(cableLabel(cable)), own.breakingKa),
-      );
+    if (!(own.breakingKa >= kA)) out.fail(tag, 'breaking', id, breakingText, cable, kA, own.breakingKa);
   }
   // Adiabatic check on the cpc at the far end's earth fault current.
   const byTable = conductor.byTable;
@@ -187,16 +216,11 @@ export function cableFindings(
   const tS = device ? operatingTimeS(device, earthFaultA, fuses) : null;
   if (tS === null) {
     if (!byTable)
-      out.unknown(
-        tag,
-        id,
-        msg.cpcNotAssessedMessage(cableLabel(cable), device ? msg.CPC_WHY_SLOW : msg.CPC_WHY_NO_DEVICE),
-      );
+      out.unknown(tag, id, cpcUnknownText, cable, device ? msg.CPC_WHY_SLOW : msg.CPC_WHY_NO_DEVICE);
   } else {
     const sMin = msg.adiabaticMinimumMm2(earthFaultA, tS, conductor.cpcK);
     const cpcMm2 = cable.cpc.sizeMm2 * Math.max(1, cable.parallel);
-    if (!(cpcMm2 >= sMin || byTable))
-      out.fail(tag, 'cpc', id, msg.cpcFailMessage(cableLabel(cable), cpcMm2, sMin));
+    if (!(cpcMm2 >= sMin || byTable)) out.fail(tag, 'cpc', id, cpcText, cable, cpcMm2, sMin);
   }
 }
 
@@ -206,8 +230,7 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
   const tag = 2 * v + 1;
   const zsOhm = hypot(out.loops.zhR, out.loops.zhX);
   const device = deviceOf(t.cables, a, j);
-  if (!device)
-    out.unknown(tag, t.nodeIds.at(v), zsMsg.zsNoDeviceMessage(nodeName(t.nodes[v], t.nodeIds.at(v))));
+  if (!device) out.unknown(tag, t.nodeIds.at(v), zsNoDeviceText, t.nodes[v], t.nodeIds.at(v));
   else {
     const requiredS = out.requiredS;
     const rcd = device.rcd;
@@ -216,39 +239,26 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
       const pass = rcdLimit !== null ? zsOhm <= rcdLimit : null;
       if (pass !== true) {
         const ia = operatingCurrent(device, requiredS, fuses);
-        const text = zsMsg.zsIaErrorMessage(
-          nodeName(t.nodes[v], t.nodeIds.at(v)),
-          'error' in ia ? ia.error : '',
-        );
-        if (pass === false) out.fail(tag, 'zs', t.nodeIds.at(v), text);
-        else out.unknown(tag, t.nodeIds.at(v), text);
+        const error = 'error' in ia ? ia.error : '';
+        if (pass === false)
+          out.fail(tag, 'zs', t.nodeIds.at(v), zsIaText, t.nodes[v], t.nodeIds.at(v), error);
+        else out.unknown(tag, t.nodeIds.at(v), zsIaText, t.nodes[v], t.nodeIds.at(v), error);
       }
     } else {
       const zsMax = (CMIN * u0V) / operatingCurrentA(device, requiredS, fuses);
       const ok = zsOhm <= zsMax || (rcdLimit !== null && zsOhm <= rcdLimit);
       if (!ok)
-        out.fail(
-          tag,
-          'zs',
-          t.nodeIds.at(v),
-          zsMsg.zsFailMessage(nodeName(t.nodes[v], t.nodeIds.at(v)), zsOhm, zsMax, requiredS),
-        );
+        out.fail(tag, 'zs', t.nodeIds.at(v), zsText, t.nodes[v], t.nodeIds.at(v), zsOhm, zsMax, requiredS);
     }
     if (supply.earthing === 'TT') {
       const ra = supply.raOhm;
       if (!rcd || !(rcd.idnMa > 0))
-        out.unknown(tag, t.nodeIds.at(v), zsMsg.ttNoRcdMessage(nodeName(t.nodes[v], t.nodeIds.at(v))));
-      else if (ra === undefined)
-        out.unknown(tag, t.nodeIds.at(v), zsMsg.ttNoRaMessage(nodeName(t.nodes[v], t.nodeIds.at(v))));
+        out.unknown(tag, t.nodeIds.at(v), ttNoRcdText, t.nodes[v], t.nodeIds.at(v));
+      else if (ra === undefined) out.unknown(tag, t.nodeIds.at(v), ttNoRaText, t.nodes[v], t.nodeIds.at(v));
       else {
         const volts = ra * (rcd.idnMa / 1000);
         if (!(volts <= 50))
-          out.fail(
-            tag,
-            'rcdTouch',
-            t.nodeIds.at(v),
-            zsMsg.ttFailMessage(nodeName(t.nodes[v], t.nodeIds.at(v)), volts),
-          );
+          out.fail(tag, 'rcdTouch', t.nodeIds.at(v), ttText, t.nodes[v], t.nodeIds.at(v), volts);
       }
     }
   }
@@ -262,8 +272,8 @@ export function nodeFindings(ctx: PassContext, a: PassArrays, out: Tagged, j: nu
     );
     if (motor) {
       out.motors.set(v, motor);
-      if (motor.check.pass === false) out.fail(tag, 'motorDip', t.nodeIds.at(v), motor.check.message);
-      else if (motor.check.pass === null) out.unknown(tag, t.nodeIds.at(v), motor.check.message);
+      if (motor.check.pass === false) out.fail(tag, 'motorDip', t.nodeIds.at(v), checkText, motor.check);
+      else if (motor.check.pass === null) out.unknown(tag, t.nodeIds.at(v), checkText, motor.check);
     }
   }
 }
