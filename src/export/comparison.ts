@@ -202,6 +202,19 @@ function loadTables(c: DesignComparison, A: string, B: string): [TextTable, Text
     },
   ];
 }
+/** The cable's own drop in A and B: "5.38 → 2.01 % of U0", the basis given once where both share it. */
+function dropText(x: CableComparison): string {
+  const pct = (f: CableComparison['a']) => (f === null || f.dropPct === null ? '–' : fmt(f.dropPct, 2));
+  const basis = (f: CableComparison['a']) => (f === null || f.dropBasis === null ? '' : f.dropBasis);
+  const ba = basis(x.a);
+  const bb = basis(x.b);
+  if (ba === bb || ba === '' || bb === '') {
+    const shared = ba || bb;
+    return `${pct(x.a)} → ${pct(x.b)}${shared ? ` % of ${shared}` : ''}`;
+  }
+  return `${pct(x.a)} % of ${ba} → ${pct(x.b)} % of ${bb}`;
+}
+
 function cableRow(x: CableComparison, withAl: boolean): string[] {
   const one = x.b ?? x.a!;
   const runText = (f: NonNullable<CableComparison['a']>) =>
@@ -212,22 +225,22 @@ function cableRow(x: CableComparison, withAl: boolean): string[] {
       : x.b === null
         ? `only in A: ${runText(one)}`
         : x.changes.map(changeText).join('; ');
-  const row = [x.id, one.name === x.id ? '' : one.name, what, signed(x.copperKgChange)];
+  const row = [x.id, one.name === x.id ? '' : one.name, what, dropText(x), signed(x.copperKgChange)];
   if (withAl) row.push(signed(x.aluminiumKgChange));
   return row;
 }
 
 function cableTable(c: DesignComparison): TextTable {
   const withAl = c.cables.some((x) => Math.abs(x.aluminiumKgChange) >= DROP_MOVED_POINTS);
-  const headers = ['Id', 'Cable', 'What changed (A → B)', 'Copper, kg'];
-  const align: Align[] = ['left', 'left', 'left', 'right'];
+  const headers = ['Id', 'Cable', 'What changed (A → B)', 'Own drop (A → B)', 'Copper, kg'];
+  const align: Align[] = ['left', 'left', 'left', 'right', 'right'];
   if (withAl) {
     headers.push('Aluminium, kg');
     align.push('right');
   }
   return {
     title: 'Cables changed',
-    note: 'Cables whose inputs differ, or that are in one design only; the metal change is B − A.',
+    note: 'Cables whose inputs differ, or that are in one design only. Own drop: the drop along the cable itself, worst phase, % of U0 (single-phase or unbalanced) or of the line voltage (ULL, balanced three-phase), as in the cable schedule. The metal change is B − A.',
     headers,
     align,
     rows: c.cables.map((x) => cableRow(x, withAl)),

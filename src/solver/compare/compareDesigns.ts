@@ -75,7 +75,9 @@ export interface CableFacts {
   sizeMm2: number;
   material: string;
   ibA: number | null;
+  /** The cable's own drop, worst phase, % of `dropBasis` (as the cable schedule gives it). */
   dropPct: number | null;
+  dropBasis: 'U0' | 'ULL' | null;
   cumulativePct: number | null;
   status: StatusOrUnsolved;
   failedChecks: number;
@@ -247,6 +249,7 @@ function cableFacts(c: Cable, results: Results): CableFacts {
     material: c.material,
     ibA: solved ? r.ibA : null,
     dropPct: solved ? r.dropPct.value : null,
+    dropBasis: solved ? r.dropPct.basis : null,
     cumulativePct: solved ? r.cumulativePct.value : null,
     status: solved && r.status !== null ? r.status : 'unsolved',
     failedChecks: countFailed(r?.protection?.checks),

@@ -140,7 +140,8 @@ describe('dropline compare FILE', () => {
     );
     // 20 m → 70 m: 1.54 % → 5.40 % of a 5 % limit (hand calculation above), clear → over.
     expect(r.out).toMatch(/\n {2}L1 +Heater +1\.54 +5\.40 +\+3\.85 +5\.00 +✓ clear +✕ over\n/);
-    expect(r.out).toMatch(/\n {2}C1 +Heater radial +length 20 → 70 m +\+/);
+    // C1 is L1's whole path, so its own drop is L1's: 1.54 % → 5.40 % of U0.
+    expect(r.out).toMatch(/\n {2}C1 +Heater radial +length 20 → 70 m +1\.54 → 5\.40 % of U0 +\+/);
     // 2.5 mm² → 4 mm²: 1.54 % → 0.96 %, the same status.
     expect(r.out).toMatch(
       /LOADS WHOSE DROP MOVED\n.*\n.*\n.*\n.*\n {2}L1 +Heater +1\.54 +0\.96 +-0\.58 +5\.00 +✓ clear +✓ clear/,

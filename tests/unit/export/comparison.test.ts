@@ -124,10 +124,16 @@ describe('comparison tables', () => {
   });
 
   test('cables changed say what changed in plain words and the copper it adds', () => {
-    expect(tables.cables.headers).toEqual(['Id', 'Cable', 'What changed (A → B)', 'Copper, kg']);
-    // 25.6032 − 7.7343 = 17.8689 kg (IEC 60028 density, by hand above).
+    expect(tables.cables.headers).toEqual([
+      'Id',
+      'Cable',
+      'What changed (A → B)',
+      'Own drop (A → B)',
+      'Copper, kg',
+    ]);
+    // Own drop 5.384 % → 2.010 % of U0 and 25.6032 − 7.7343 = 17.8689 kg (both by hand above).
     expect(tables.cables.rows).toEqual([
-      ['SM', 'Sub-main', 'size 6 → 16 mm²; cpc size 2.5 → 16 mm²', '+17.9'],
+      ['SM', 'Sub-main', 'size 6 → 16 mm²; cpc size 2.5 → 16 mm²', '5.38 → 2.01 % of U0', '+17.9'],
     ]);
     expect(tables.changes.rows).toEqual([]);
     expect(tables.changes.empty).toMatch(/No setting, supply, board or load input changed/);
@@ -160,7 +166,14 @@ describe('comparison tables', () => {
     expect(l2.slice(2, 5)).toEqual(['6.14', '–', '–']);
     expect(l2[7]).toBe('not in this design');
     // C2 is gone: 0.9779 kg of copper less (by hand above).
-    expect(row(t.cables.rows, 'C2')).toEqual(['C2', '', 'only in A: 1.5 mm² Cu, 20.0 m, DB → L2', '-0.98']);
+    // Its own drop was 0.755 % of U0 (by hand above).
+    expect(row(t.cables.rows, 'C2')).toEqual([
+      'C2',
+      '',
+      'only in A: 1.5 mm² Cu, 20.0 m, DB → L2',
+      '0.76 → – % of U0',
+      '-0.98',
+    ]);
   });
 
   test('the tables come in print order and every one can say it is empty', () => {
