@@ -41,8 +41,11 @@ export { ok, fail } from './commands/result.ts';
 export type { NodePatch, CablePatch, ProposedChange };
 
 export type Command =
-  /** Adds a node; with `feedFrom`, also a cable from that node to the new one (one step). */
-  | { type: 'addNode'; node: NodeElement; feedFrom?: Id }
+  /**
+   * Adds a node; with `feedFrom`, also a cable from that node to the new one (one step). With
+   * `routeAllowanceM` too, and both ends on the site plan, that cable is measured on the plan.
+   */
+  | { type: 'addNode'; node: NodeElement; feedFrom?: Id; routeAllowanceM?: number }
   /** A cable from the upstream node `from` to the downstream node `to`, from the project's cable defaults. */
   | { type: 'connectCable'; from: Id; to: Id; id?: Id; patch?: CablePatch }
   | { type: 'moveNodes'; moves: { id: Id; position: Position }[] }
@@ -88,7 +91,7 @@ export type CommandType = Command['type'];
 export function applyCommand(doc: ProjectDocument, command: Command): CommandResult {
   switch (command.type) {
     case 'addNode':
-      return addNode(doc, command.node, command.feedFrom);
+      return addNode(doc, command.node, command.feedFrom, command.routeAllowanceM);
     case 'connectCable':
       return connectCable(doc, command.from, command.to, command.id, command.patch);
     case 'moveNodes':

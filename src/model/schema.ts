@@ -39,6 +39,8 @@ const name = () => z.string().max(200);
 export const positionSchema = z.strictObject({ x: finite(), y: finite() });
 /** Largest site a plan may describe, metres across. */
 export const MAX_PLAN_M = 100_000;
+/** The most a cable's route allowance adds to its length measured on the plan, metres. */
+export const MAX_ALLOWANCE_M = 1000;
 /** Longest plan image, as data URL text (about 9 MB of picture). */
 export const MAX_PLAN_IMAGE_CHARS = 12_000_000;
 export const planPointSchema = z
@@ -59,7 +61,7 @@ export const sitePlanSchema = z
   })
   .describe('The site plan that elements are placed on to measure cable lengths.');
 export const planRouteSchema = z
-  .strictObject({ allowanceM: z.number().min(0).max(1000) })
+  .strictObject({ allowanceM: z.number().min(0).max(MAX_ALLOWANCE_M) })
   .describe('Length measured on the site plan (rectilinear) plus this allowance, metres.');
 const phaseCount = z.union([z.literal(1), z.literal(3)]);
 // Spelled out rather than built from PHASES / LOAD_KINDS so the inferred types are the literal

@@ -2,7 +2,7 @@
  * Editor actions shared by the top bar, keyboard shortcuts, context menu and tray. Each turns a
  * user intent into store commands; none edits the document directly.
  */
-import type { Id, Position } from '../model/types.ts';
+import type { Id, NodeElement, PlanPoint, Position } from '../model/types.ts';
 import { GRID, NODE_SIZE } from '../model/layout.ts';
 import { editorStore } from '../store/editorStore.ts';
 import { buildNode, type PartKind } from './parts.ts';
@@ -15,12 +15,44 @@ export function snap(p: Position): Position {
   return { x: Math.round(p.x / GRID) * GRID, y: Math.round(p.y / GRID) * GRID };
 }
 
+/** Plan markers closer than this, metres, are nudged apart when a part is placed from the tray. */
+const PLAN_SPACING_M = 3;
+
+/** `point`, moved right past any element already standing there, so a new marker is not hidden. */
+function freePlanPoint(nodes: readonly NodeElement[], point: PlanPoint): PlanPoint {
+  let p = point;
+  for (let k = 0; k < nodes.length; k++) {
+    const taken = nodes.some(
+      (n) =>
+        n.plan && Math.abs(n.plan.xM - p.xM) < PLAN_SPACING_M && Math.abs(n.plan.yM - p.yM) < PLAN_SPACING_M,
+    );
+    if (!taken) break;
+    p = { xM: Math.round((p.xM + PLAN_SPACING_M) * 10) / 10, yM: p.yM };
+  }
+  return p;
+}
+
+/** A free place on the diagram below everything drawn, for a part added while the plan is shown. */
+function belowDiagram(nodes: readonly NodeElement[]): Position {
+  if (nodes.length === 0) return { x: 0, y: 0 };
+  let left = Infinity;
+  let bottom = -Infinity;
+  for (const n of nodes) {
+    left = Math.min(left, n.position.x);
+    bottom = Math.max(bottom, n.position.y + NODE_SIZE[n.kind].height);
+  }
+  return { x: left, y: bottom + 4 * GRID };
+}
+
 /**
  * Adds a part. Without a position it lands below the one selected board/junction/supply and is fed
- * from it (the quick way to hang loads off a board), or else in the middle of the view.
+ * from it (the quick way to hang loads off a board), or else in the middle of the view. While the
+ * site plan is shown it is also placed on the plan, in the middle of the view; a cable feeding it
+ * from an element on the plan is then measured on the plan, with the plan bar's allowance.
  */
 export function addPart(part: PartKind, at?: Position): void {
   const s = store.getState();
+  const onPlan = at ? undefined : canvas()?.planPlacement?.();
   let feedFrom: Id | undefined;
   let position = at;
   if (!position) {
@@ -33,13 +65,18 @@ export function addPart(part: PartKind, at?: Position): void {
         x: only.position.x + size.width / 2 - 48 + fedAlready * 128,
         y: only.position.y + size.height + 112,
       };
+    } else if (onPlan) {
+      position = belowDiagram(s.doc.nodes);
     } else {
       const c = canvas()?.viewCentre() ?? { x: 0, y: 0 };
       position = { x: c.x - 48, y: c.y - 40 };
     }
   }
-  const node = buildNode(s.doc, part, snap(position));
-  const out = s.dispatch({ type: 'addNode', node, ...(feedFrom ? { feedFrom } : {}) });
+  const built = buildNode(s.doc, part, snap(position));
+  const node = onPlan ? { ...built, plan: freePlanPoint(s.doc.nodes, onPlan.point) } : built;
+  const measure =
+    onPlan && feedFrom && onPlan.allowanceM !== null ? { routeAllowanceM: onPlan.allowanceM } : {};
+  const out = s.dispatch({ type: 'addNode', node, ...(feedFrom ? { feedFrom, ...measure } : {}) });
   // Loads hung off a board keep the board selected, so the next click hangs another one there;
   // a new board or junction becomes the place to hang the next parts from.
   if (out.ok) s.setSelection(feedFrom && node.kind === 'load' ? [feedFrom] : [node.id]);

@@ -2,7 +2,7 @@
  * The few things outside the canvas (top bar, keyboard, tray) ask of the viewport. The canvas
  * registers them when it mounts; until then they do nothing.
  */
-import type { Position } from '../model/types.ts';
+import type { PlanPoint, Position } from '../model/types.ts';
 
 export interface CanvasApi {
   /** The whole diagram on screen, however small. */
@@ -14,6 +14,12 @@ export interface CanvasApi {
   centreOn(position: Position): void;
   /** Canvas coordinates of the middle of what is on screen, where a clicked tray part lands. */
   viewCentre(): Position;
+  /**
+   * Given only while the site plan is shown: the plan point in the middle of the view, where a
+   * clicked tray part is placed on the plan, and the allowance the plan bar gives cables measured
+   * on the plan (null while that field holds no usable number).
+   */
+  planPlacement?(): { point: PlanPoint; allowanceM: number | null };
 }
 
 let api: CanvasApi | null = null;

@@ -385,3 +385,35 @@ test('site plan: dragging a board re-measures its cables while it moves; the eng
   expect(doubled).toBeLessThan(2 * (38 - allowance) + allowance + 1);
   expect(s.errors).toEqual([]);
 });
+
+test('site plan: a part clicked in the tray lands on the plan, fed from the selected board and measured there', async () => {
+  const ui = new Panels(s.page);
+  await ui.start();
+  const page = s.page;
+  await page.getByTestId('canvas-plan').click();
+  await page.getByTestId('plan-marker-DB4').click();
+  await page.getByTestId('part-load:sockets').click();
+  await page.waitForTimeout(700);
+  const parsed = parseDocument(await readAutosave(page));
+  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+  const saved = parsed.doc;
+  const before = new Set(demo().nodes.map((n) => n.id));
+  const added = saved.nodes.filter((n) => !before.has(n.id));
+  expect(added).toHaveLength(1);
+  const node = added[0]!;
+  expect(node.plan).toBeDefined();
+  await expect(page.getByTestId(`plan-marker-${node.id}`).count()).resolves.toBe(1);
+  // Its cable comes from DB4 and is measured on the plan with the bar's allowance (2 m):
+  // |Δx| + |Δy| + 2, rounded up to 0.1 m (common practice for routes along walls and trays).
+  const fed = saved.cables.find((c) => c.to === node.id)!;
+  expect(fed.from).toBe('DB4');
+  expect(fed.route).toEqual({ allowanceM: 2 });
+  const db4 = saved.nodes.find((n) => n.id === 'DB4')!.plan!;
+  const d = Math.abs(db4.xM - node.plan!.xM) + Math.abs(db4.yM - node.plan!.yM) + 2;
+  expect(fed.lengthM).toBeGreaterThanOrEqual(d - 1e-9);
+  expect(fed.lengthM).toBeLessThan(d + 0.1 + 1e-9);
+  // One undo step takes both away.
+  await page.getByRole('button', { name: 'Undo' }).click();
+  await expect(page.getByTestId(`plan-marker-${node.id}`).count()).resolves.toBe(0);
+  expect(s.errors).toEqual([]);
+});

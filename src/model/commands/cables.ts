@@ -1,6 +1,7 @@
 import type { Cable, Id, ProjectDocument } from '../types.ts';
 import { fail, ok, type CommandResult } from './result.ts';
 import { MAX_PARALLEL } from '../bounds.ts';
+import { MAX_ALLOWANCE_M } from '../schema.ts';
 import { describeCable, describeNode } from './describe.ts';
 import { nextIdFor, documentIds } from '../ids.ts';
 import { newCable } from '../defaults.ts';
@@ -138,11 +139,11 @@ export function updateCable(doc: ProjectDocument, id: Id, patch: CablePatch): Co
     !(
       Number.isFinite(patch.route.allowanceM) &&
       patch.route.allowanceM >= 0 &&
-      patch.route.allowanceM <= 1000
+      patch.route.allowanceM <= MAX_ALLOWANCE_M
     )
   ) {
     return fail(
-      `${describeCable(cable)}: the allowance on the plan length must be 0 to 1000 metres; got ${patch.route.allowanceM}.`,
+      `${describeCable(cable)}: the allowance on the plan length must be 0 to ${MAX_ALLOWANCE_M} metres; got ${patch.route.allowanceM}.`,
     );
   }
   const merged: Record<string, unknown> = { ...cable };

@@ -3,6 +3,8 @@ import { fail, ok, type CommandResult } from './result.ts';
 import { describeNode } from './describe.ts';
 import { connectCable } from './cables.ts';
 import { documentIds } from '../ids.ts';
+import { MAX_ALLOWANCE_M } from '../schema.ts';
+import { withMeasuredLengths } from '../planLengths.ts';
 
 type Editable<T> = Partial<Omit<T, 'id' | 'kind'>>;
 
@@ -42,7 +44,17 @@ function finitePosition(p: Position): boolean {
   return Number.isFinite(p.x) && Number.isFinite(p.y);
 }
 
-export function addNode(doc: ProjectDocument, node: NodeElement, feedFrom?: Id): CommandResult {
+/**
+ * Adds `node`; with `feedFrom`, also a cable from that node to it. With `routeAllowanceM` as well,
+ * and both ends placed on the site plan, the new cable is measured on the plan (its route plus the
+ * allowance) instead of taking the default length.
+ */
+export function addNode(
+  doc: ProjectDocument,
+  node: NodeElement,
+  feedFrom?: Id,
+  routeAllowanceM?: number,
+): CommandResult {
   const taken = new Set(documentIds(doc));
   if (!node.id) return fail('A new element needs an id.');
   if (taken.has(node.id))
@@ -51,9 +63,25 @@ export function addNode(doc: ProjectDocument, node: NodeElement, feedFrom?: Id):
     return fail(`${describeNode(node)}: position must be two finite numbers.`);
   const added: ProjectDocument = { ...doc, nodes: [...doc.nodes, node] };
   if (feedFrom === undefined) return ok(added, [node.id]);
-  const fed = connectCable(added, feedFrom, node.id);
+  if (
+    routeAllowanceM !== undefined &&
+    !(Number.isFinite(routeAllowanceM) && routeAllowanceM >= 0 && routeAllowanceM <= MAX_ALLOWANCE_M)
+  )
+    return fail(
+      `The allowance added to a length measured on the plan must be 0 to ${MAX_ALLOWANCE_M} metres; got ${routeAllowanceM}.`,
+    );
+  const from = doc.nodes.find((n) => n.id === feedFrom);
+  const measured = routeAllowanceM !== undefined && from?.plan !== undefined && node.plan !== undefined;
+  const fed = connectCable(
+    added,
+    feedFrom,
+    node.id,
+    undefined,
+    measured ? { route: { allowanceM: routeAllowanceM } } : undefined,
+  );
   if (!fed.ok) return fed;
-  return ok(fed.doc, [node.id, ...fed.created]);
+  const out = measured ? withMeasuredLengths(fed.doc, new Set(fed.created)) : fed.doc;
+  return ok(out, [node.id, ...fed.created]);
 }
 
 /**

@@ -30,6 +30,7 @@ import {
   type PlanNode,
 } from './planFlow.ts';
 import { readPlanPicture } from './planPicture.ts';
+import { MAX_ALLOWANCE_M } from '../../model/schema.ts';
 import './plan.css';
 
 const nodeTypes = { marker: MarkerView, picture: PictureView };
@@ -107,14 +108,38 @@ function ScaleByPoints({ pick, onPick }: { pick: ScalePick | null; onPick: (p: S
   );
 }
 
-function PlanBar({ pick, onPick }: { pick: ScalePick | null; onPick: (p: ScalePick | null) => void }) {
+/** The allowance field's text as metres, or null where it is not a usable allowance. */
+function allowanceMetres(text: string): number | null {
+  const m = Number(text);
+  return text.trim() !== '' && Number.isFinite(m) && m >= 0 && m <= MAX_ALLOWANCE_M ? m : null;
+}
+
+/** The plan point in the middle of what the plan view shows. */
+function planViewCentre(flow: ReturnType<typeof useReactFlow>): PlanPoint {
+  const el = document.querySelector('.pl-canvas .react-flow')?.getBoundingClientRect();
+  const centre = el
+    ? flow.screenToFlowPosition({ x: el.left + el.width / 2, y: el.top + el.height / 2 })
+    : { x: 0, y: 0 };
+  return toPoint(centre.x - MARKER / 2, centre.y - MARKER / 2);
+}
+
+function PlanBar({
+  pick,
+  onPick,
+  allowance,
+  setAllowance,
+}: {
+  pick: ScalePick | null;
+  onPick: (p: ScalePick | null) => void;
+  allowance: string;
+  setAllowance: (text: string) => void;
+}) {
   const doc = useEditor((s) => s.doc);
   const selection = useEditor((s) => s.selection);
   const dispatch = useEditor((s) => s.dispatch);
   const notify = useEditor((s) => s.notify);
   const flow = useReactFlow();
   const file = useRef<HTMLInputElement>(null);
-  const [allowance, setAllowance] = useState('2');
   const unplaced = doc.nodes.filter((n) => !n.plan);
   const selectedPlaced = doc.nodes.filter((n) => n.plan && selection.includes(n.id));
   const placedIds = new Set(doc.nodes.filter((n) => n.plan).map((n) => n.id));
@@ -125,20 +150,11 @@ function PlanBar({ pick, onPick }: { pick: ScalePick | null; onPick: (p: ScalePi
     selection.length > 0
       ? measurable.filter((c) => selection.includes(c.id))
       : measurable.filter((c) => !c.route);
-  const allowanceM = Number(allowance);
-  const allowanceOk =
-    allowance.trim() !== '' && Number.isFinite(allowanceM) && allowanceM >= 0 && allowanceM <= 1000;
+  const allowanceM = allowanceMetres(allowance) ?? 0;
+  const allowanceOk = allowanceMetres(allowance) !== null;
 
-  const placeAtCentre = (id: Id) => {
-    const el = document.querySelector('.pl-canvas .react-flow')?.getBoundingClientRect();
-    const centre = el
-      ? flow.screenToFlowPosition({ x: el.left + el.width / 2, y: el.top + el.height / 2 })
-      : { x: 0, y: 0 };
-    dispatch({
-      type: 'placeOnPlan',
-      moves: [{ id, plan: toPoint(centre.x - MARKER / 2, centre.y - MARKER / 2) }],
-    });
-  };
+  const placeAtCentre = (id: Id) =>
+    dispatch({ type: 'placeOnPlan', moves: [{ id, plan: planViewCentre(flow) }] });
 
   return (
     <Panel position="top-left" className="pl-bar">
@@ -265,8 +281,11 @@ function PlanView() {
   const [drag, setDrag] = useState<Record<Id, PlanPoint> | null>(null);
   const [pick, setPick] = useState<ScalePick | null>(null);
   const flow = useReactFlow();
+  const [allowance, setAllowance] = useState('2');
+  const allowanceNow = useRef(allowance);
+  allowanceNow.current = allowance;
   // Fit and 1:1 from the top bar and the keyboard act on the plan while it is shown. A part added
-  // from the tray still goes onto the diagram (near its top), to be placed on the plan from here.
+  // from the tray goes on the plan in the middle of the view (and on the diagram below the rest).
   useEffect(() => {
     registerCanvas({
       fitView: () => void flow.fitView({ duration: 250 }),
@@ -274,6 +293,10 @@ function PlanView() {
       zoomActual: () => void flow.zoomTo(1, { duration: 0 }),
       centreOn: (p) => void flow.setCenter(p.x, p.y, { zoom: Math.max(flow.getZoom(), 1), duration: 300 }),
       viewCentre: () => ({ x: 0, y: 0 }),
+      planPlacement: () => ({
+        point: planViewCentre(flow),
+        allowanceM: allowanceMetres(allowanceNow.current),
+      }),
     });
     return () => registerCanvas(null);
   }, [flow]);
@@ -356,7 +379,7 @@ function PlanView() {
       >
         <Background variant={BackgroundVariant.Lines} gap={PX_PER_M * 5} color="#eef1f3" />
         <Controls showInteractive={false} position="bottom-left" />
-        <PlanBar pick={pick} onPick={setPick} />
+        <PlanBar pick={pick} onPick={setPick} allowance={allowance} setAllowance={setAllowance} />
       </ReactFlow>
     </div>
   );

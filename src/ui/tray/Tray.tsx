@@ -26,7 +26,7 @@ export function Tray() {
                   draggable
                   className="ed-part"
                   data-testid={`part-${p.part}`}
-                  title={`${p.title}: drag onto the diagram, or click to add (below the selected board)`}
+                  title={`${p.title}: drag onto the diagram, or click to add (fed from the selected board; placed on the site plan too while it is shown)`}
                   onDragStart={(e) => {
                     e.dataTransfer.setData(PART_MIME, p.part);
                     e.dataTransfer.effectAllowed = 'copy';

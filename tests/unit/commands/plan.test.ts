@@ -145,4 +145,33 @@ describe('lengths measured on the site plan', () => {
       /measured on the site plan.*\+ 3 m allowance/,
     );
   });
+
+  test('a part added on the plan and fed from a placed board is measured there, in one step', () => {
+    const doc = placed();
+    const node = {
+      ...doc.nodes.find((n) => n.id === 'L1')!,
+      id: 'L9',
+      name: 'Yard light',
+      plan: { xM: 30, yM: 1 },
+    };
+    const out = applyCommand(doc, { type: 'addNode', node, feedFrom: 'DB1', routeAllowanceM: 1.5 });
+    if (!out.ok) throw new Error(out.error);
+    const fed = out.doc.cables.find((c) => c.to === 'L9')!;
+    // DB1 at (12, 5), L9 at (30, 1): 18 + 4 = 22 m on the plan, plus 1.5 m.
+    expect(fed.route).toEqual({ allowanceM: 1.5 });
+    expect(fed.lengthM).toBe(23.5);
+    expect(out.created).toEqual(['L9', fed.id]);
+    // Not on the plan at the other end, or no allowance given: the default length, typed.
+    const off = { ...node, id: 'L10', plan: undefined };
+    const typed = run(doc, { type: 'addNode', node: off, feedFrom: 'DB1', routeAllowanceM: 1.5 });
+    const plain = typed.cables.find((c) => c.to === 'L10')!;
+    expect(plain.route).toBeUndefined();
+    expect(plain.lengthM).toBe(doc.settings.cableDefaults.lengthM);
+    const noAllowance = run(doc, { type: 'addNode', node, feedFrom: 'DB1' });
+    expect(noAllowance.cables.find((c) => c.to === 'L9')!.route).toBeUndefined();
+    // A bad allowance is refused with the range, and nothing is added.
+    const bad = applyCommand(doc, { type: 'addNode', node, feedFrom: 'DB1', routeAllowanceM: -2 });
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) expect(bad.error).toMatch(/allowance .* must be 0 to 1000 metres; got -2/);
+  });
 });
