@@ -2,7 +2,7 @@
 
 import type { ScheduleSheet } from '../export/schedules.ts';
 
-const SHEET_NAMES: readonly ScheduleSheet[] = ['cables', 'loads', 'boards'];
+const SHEET_NAMES: readonly ScheduleSheet[] = ['cables', 'loads', 'boards', 'tests'];
 
 export type CliArgs =
   | { command: 'help' }
@@ -42,9 +42,10 @@ options:
   --json         print the full results as JSON for other programs (shape: docs/cli-json.md)
   --working ID   print every working record behind one element's figures (a cable, board or load id)
   --schedule SHEET
-                 print the cable, load or board schedule (SHEET: cables, loads or boards) as CSV, as
-                 the editor's Download CSV writes it: project details, data used and cautions, then
-                 one row per element
+                 print a schedule as CSV (SHEET: cables, loads, boards, or tests: the expected test
+                 values of every circuit, with empty columns for the measured ones), as the editor's
+                 Download CSV writes it: project details, data used and cautions, then one row per
+                 element
   --pdf OUT.pdf  also write the tender pack to OUT.pdf (A3 landscape): the single-line diagram, a
                  summary with the data, standards and cautions used, the current design compared with
                  each alternative the project keeps, the schedules, the findings and the working

@@ -184,7 +184,9 @@ export function runCli(
   }
   if (args.schedule !== null) {
     const sheet = SCHEDULE_SHEETS[args.schedule];
-    io.stdout(scheduleCsv(sheet.title, sheet.build(doc, results), doc, results, sheet.statusLabel));
+    io.stdout(
+      scheduleCsv(sheet.title, sheet.build(doc, results), doc, results, sheet.statusLabel, sheet.note),
+    );
     return summary.exitCode;
   }
   if (args.json) io.stdout(cliJsonText(buildCliJson(doc, results, args.file, summary)));

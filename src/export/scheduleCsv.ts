@@ -29,7 +29,7 @@ function line(fields: readonly string[], text = true): string {
 }
 
 /**
- * `statusLabel` heads the second column (after the id, as on screen): a load's own status, or for
+ * `note` (where the sheet has one) is written above the cautions. `statusLabel` heads the second column (after the id, as on screen): a load's own status, or for
  * cables and boards the status of the worst load they feed (what the schedule's glyph shows).
  * @example scheduleCsv('Cable schedule', cableSchedule(doc, results), doc, results)
  *   // "\uFEFFDropline cable schedule\r\nProject,…\r\n…\r\nId,Status,Cable,From,To,Length m,…"
@@ -40,6 +40,7 @@ export function scheduleCsv(
   doc: ProjectDocument,
   results: Results,
   statusLabel = 'Status',
+  note?: string,
 ): string {
   const d = doc.details;
   const lines: string[] = [
@@ -53,6 +54,7 @@ export function scheduleCsv(
     line(['Conductor data', `${results.dataSet.title} (${results.dataSet.id})`]),
     line(['Drop limits', results.profile.title]),
     line(['Standards and editions', results.references.join('; ')]),
+    ...(note ? [line(['Note', note])] : []),
     ...CAUTIONS.map((c) => line(['Caution', c])),
     '',
     line(['Id', statusLabel, ...schedule.columns.map((c) => c.label)]),

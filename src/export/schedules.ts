@@ -17,6 +17,8 @@ export interface Column {
   /** Shown in the header's tooltip: what the column is, with its unit and basis. */
   title: string;
   numeric: boolean;
+  /** Left empty, to be filled in on site (printed in the pack and the CSV, not shown in the editor). */
+  onSite?: boolean;
 }
 
 export interface Row {
@@ -270,19 +272,154 @@ export function boardSchedule(doc: ProjectDocument, results: Results): Schedule 
   return { columns, rows };
 }
 
-export type ScheduleSheet = 'cables' | 'loads' | 'boards';
+/** The cables of the circuit that ends at `id`: back along its path while the sending end is a junction. */
+function circuitCables(doc: ProjectDocument, nodes: Map<Id, NodeElement>, path: readonly Id[]): Id[] {
+  const cables = new Map(doc.cables.map((c) => [c.id, c]));
+  const out: Id[] = [];
+  for (let k = path.length - 1; k >= 0; k--) {
+    const c = cables.get(path[k]!);
+    if (!c) break;
+    out.unshift(c.id);
+    if (nodes.get(c.from)?.kind !== 'junction') break;
+  }
+  return out;
+}
+
+const onSite = (id: string, label: string, title: string): Column => ({
+  ...col(id, label, `${title}: to be filled in on site`, false),
+  onSite: true,
+});
 
 /**
- * The three schedules by name, as the editor's drawer and `dropline check --schedule` offer them:
- * title, builder, and what the status column means on that sheet.
+ * What a tester should find at the end of every circuit (each load, and each board at the end of
+ * its sub-main), from the design: the circuit's R1 + R2 and the loop impedance with conductors at
+ * 20 °C, the largest Zs to accept when measuring cold, the prospective fault current, the device
+ * and its RCD; with empty columns for the measured values. Rows are grouped by the board the
+ * circuit starts from, boards in document order.
+ */
+export function testSchedule(doc: ProjectDocument, results: Results): Schedule {
+  const nodes = new Map(doc.nodes.map((n) => [n.id, n]));
+  const cables = new Map(doc.cables.map((c) => [c.id, c]));
+  const columns = [
+    col('to', 'Circuit to', 'The load, or the board a sub-main feeds', false),
+    col('board', 'From board', 'Where the circuit starts: its device is there', false),
+    col('cables', 'Cables', 'The cables of the circuit, from the board (through junctions)', false),
+    col('device', 'Device', 'Protective device of the circuit, with its RCD', false),
+    col(
+      'size',
+      'Size mm²',
+      'Line conductor / cpc cross-section of each cable of the circuit, mm² (arm.: the armour is the cpc)',
+      false,
+    ),
+    col('length', 'Length m', 'Route length of the circuit, one way, metres'),
+    col(
+      'r1r2',
+      'R1+R2 Ω',
+      'Expected end-to-end R1 + R2 of the circuit with conductors at 20 °C: the sum over its cables (each in the cable’s working), ohms',
+    ),
+    col(
+      'zsCold',
+      'Zs exp. Ω',
+      'Expected earth fault loop impedance at the circuit end with conductors at 20 °C: the source loop plus every segment’s R1 + R2 from the origin, ohms',
+    ),
+    col(
+      'zsTest',
+      'Zs max test Ω',
+      'Largest Zs to accept when testing with conductors cold: 0.8 × the maximum Zs for the device (common practice, allowing for the rise in conductor temperature in service), ohms',
+    ),
+    col('pfc', 'Ipf kA', 'Expected largest prospective fault current at the circuit end, kA'),
+    onSite('r1r2Measured', 'R1+R2 meas.', 'Measured R1 + R2, ohms'),
+    onSite('zsMeasured', 'Zs meas.', 'Measured earth fault loop impedance, ohms'),
+    onSite('irMeasured', 'IR MΩ', 'Measured insulation resistance, megohms'),
+    onSite('rcdMeasured', 'RCD ms', 'Measured RCD operating time, milliseconds'),
+    onSite('polarity', 'Polarity', 'Polarity confirmed'),
+  ];
+  const boardOrder = new Map(doc.nodes.map((n, k) => [n.id, k]));
+  const rows: { row: Row; board: number; order: number }[] = [];
+  doc.nodes.forEach((n, order) => {
+    if (n.kind !== 'load' && n.kind !== 'board') return;
+    const r = results.nodes[n.id];
+    if (!r || r.path.length === 0) return;
+    const ids = circuitCables(doc, nodes, r.path);
+    const list = ids.map((id) => cables.get(id)!);
+    const first = list[0];
+    if (!first) return;
+    const p = r.protection;
+    const device = results.cables[ids[ids.length - 1]!]?.protection?.device ?? first.device;
+    let r1r2: number | null = 0;
+    for (const id of ids) {
+      const v = results.cables[id]?.protection?.r1r2ColdOhm;
+      r1r2 = r1r2 !== null && v !== undefined && Number.isFinite(v) ? r1r2 + v : null;
+    }
+    const failed = [p?.checks, ...ids.map((id) => results.cables[id]?.protection?.checks)].some((cs) =>
+      cs?.some((c) => c.pass === false),
+    );
+    const sizes = [
+      ...new Set(
+        list.map(
+          (c) =>
+            `${c.parallel > 1 ? `${c.parallel}× ` : ''}${c.sizeMm2} / ${c.cpc.sizeMm2}${c.cpc.kind === 'armour' ? ' arm.' : ''}`,
+        ),
+      ),
+    ];
+    rows.push({
+      board: boardOrder.get(first.from) ?? -1,
+      order,
+      row: {
+        id: n.id,
+        // A board's own status is the worst load it feeds; here only its circuit's checks count.
+        status: failed ? 'over' : n.kind === 'board' ? (p ? 'within' : null) : r.status,
+        cells: {
+          to: txt(n.name || n.id),
+          board: txt(nameOf(nodes, first.from)),
+          cables: txt(ids.join(' → ')),
+          device: txt(deviceShort(device ?? undefined)),
+          size: { sort: first.sizeMm2, text: sizes.join(' → ') },
+          length: num(
+            list.reduce((sum, c) => sum + c.lengthM, 0),
+            1,
+          ),
+          r1r2: num(r1r2, 3),
+          zsCold: num(p?.zsColdOhm, 3),
+          zsTest: num(p?.testZsMaxOhm, 3),
+          pfc: num(p ? p.fault.maxA / 1000 : undefined, 2),
+          r1r2Measured: txt(''),
+          zsMeasured: txt(''),
+          irMeasured: txt(''),
+          rcdMeasured: txt(''),
+          polarity: txt(''),
+        },
+      },
+    });
+  });
+  rows.sort((a, b) => a.board - b.board || a.order - b.order);
+  return { columns, rows: rows.map((x) => x.row) };
+}
+
+export type ScheduleSheet = 'cables' | 'loads' | 'boards' | 'tests';
+
+/**
+ * The schedules by name, as the editor's drawer and `dropline check --schedule` offer them: title,
+ * builder, what the status column means on that sheet, and a note printed with it where it needs one.
  */
 export const SCHEDULE_SHEETS: Readonly<
   Record<
     ScheduleSheet,
-    { title: string; build: (doc: ProjectDocument, results: Results) => Schedule; statusLabel: string }
+    {
+      title: string;
+      build: (doc: ProjectDocument, results: Results) => Schedule;
+      statusLabel: string;
+      note?: string;
+    }
   >
 > = {
   cables: { title: 'Cable schedule', build: cableSchedule, statusLabel: 'Status (worst load fed)' },
   loads: { title: 'Loads', build: loadSchedule, statusLabel: 'Status' },
   boards: { title: 'Board schedule', build: boardSchedule, statusLabel: 'Status (worst load fed)' },
+  tests: {
+    title: 'Expected test values',
+    build: testSchedule,
+    statusLabel: 'Design status',
+    note: 'Expected values from the design, for comparison with the values measured on site. R1 + R2 and Zs are with conductors at 20 °C; a cold measurement above "Zs max test" needs investigating before the circuit is put into service. Design status: over where a protection check of the circuit fails; otherwise a load’s drop status, and clear for a sub-main. These are design figures, not test results: the tests themselves are made and recorded by a competent person under the local wiring rules.',
+  },
 };

@@ -87,6 +87,31 @@ test('a schedule row selects the element; the details show the engine’s figure
   expect(s.errors).toEqual([]);
 });
 
+test('the expected test values sheet gives the engine’s cold Zs and leaves the measured columns to the CSV', async () => {
+  const doc = demo();
+  const results = solve(doc);
+  const ui = new Panels(s.page);
+  await ui.start();
+  await ui.openSchedules();
+  await s.page.getByTestId('sheet-tests').click();
+  await expect(s.page.getByTestId('schedule-note').textContent()).resolves.toContain('conductors at 20 °C');
+  const table = s.page.getByTestId('schedule-tests');
+  // Columns to fill in on site are not on screen.
+  await expect(table.locator('th', { hasText: 'Zs meas.' }).count()).resolves.toBe(0);
+  const load = doc.nodes.find((n) => n.kind === 'load' && results.loads[n.id]?.protection)!;
+  const zs = results.loads[load.id]!.protection!.zsColdOhm.toFixed(3);
+  await expect(table.locator(`tr[data-row="${load.id}"]`).textContent()).resolves.toContain(zs);
+  await screenshot(s.page, 'panels-expected-tests');
+  const [file] = await Promise.all([
+    s.page.waitForEvent('download'),
+    s.page.getByTestId('schedule-csv').click(),
+  ]);
+  const text = readFileSync((await file.path())!, 'utf8');
+  expect(text).toContain('Note,"Expected values from the design');
+  expect(text).toMatch(/R1\+R2 meas\.,Zs meas\.,IR MΩ,RCD ms,Polarity\r\n/);
+  expect(s.errors).toEqual([]);
+});
+
 test('the cable schedule downloads as a CSV that holds every cable with the engine’s figures', async () => {
   const doc = demo();
   const results = solve(doc);

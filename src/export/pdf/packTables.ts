@@ -1,4 +1,4 @@
-/** The tender pack's tables: the three schedules, the findings and the working, flowing over as many sheets as they need. */
+/** The tender pack's tables: the schedules, the findings and the working, flowing over as many sheets as they need. */
 import type { jsPDF } from 'jspdf';
 import { autoTable, type CellDef, type RowInput, type UserOptions } from 'jspdf-autotable';
 import type { ProjectDocument } from '../../model/types.ts';
@@ -45,6 +45,9 @@ export function flowing(pdf: jsPDF, sheets: Sheets, title: string) {
   } satisfies UserOptions;
 }
 
+/** Columns left empty for handwriting on site: room to write a figure. */
+const ON_SITE_WIDTH_MM = 17;
+
 function table(
   pdf: jsPDF,
   sheets: Sheets,
@@ -52,9 +55,11 @@ function table(
   head: string[],
   body: RowInput[],
   colour?: (row: number, col: number) => Rgb | undefined,
+  extra: Pick<UserOptions, 'startY' | 'columnStyles'> = {},
 ) {
   autoTable(pdf, {
     ...flowing(pdf, sheets, title),
+    ...extra,
     head: [head],
     body,
     didParseCell: (data) => {
@@ -72,10 +77,22 @@ export function scheduleSheet(
   results: Results,
   sheet: ScheduleSheet,
 ) {
-  const { title, build, statusLabel } = SCHEDULE_SHEETS[sheet];
+  const { title, build, statusLabel, note } = SCHEDULE_SHEETS[sheet];
   const schedule = build(doc, results);
   sheets.start(title);
+  let startY = CONTENT.y;
+  if (note) {
+    pdf.setFont(PACK_FONT, 'normal');
+    pdf.setFontSize(8);
+    const lines = pdf.splitTextToSize(note, CONTENT.w) as string[];
+    pdf.text(lines, CONTENT.x, CONTENT.y + 3);
+    startY = CONTENT.y + 3 + lines.length * 3.6;
+  }
   const statuses = schedule.rows.map((r) => r.status);
+  // Two columns (id, status) come before the schedule's own.
+  const columnStyles = Object.fromEntries(
+    schedule.columns.flatMap((c, k) => (c.onSite ? [[k + 2, { minCellWidth: ON_SITE_WIDTH_MM }]] : [])),
+  );
   table(
     pdf,
     sheets,
@@ -87,6 +104,7 @@ export function scheduleSheet(
       ...schedule.columns.map((c) => row.cells[c.id]?.text ?? ''),
     ]),
     (row, col) => (col === 1 ? rgb(STATUS_LOOK[statuses[row] ?? 'none'].colour) : undefined),
+    { startY, columnStyles },
   );
 }
 

@@ -93,7 +93,8 @@ export function buildTenderPack(
   sheets.start('Summary, data and cautions');
   summarySheet(pdf, doc, results);
   alternativesSheet(pdf, sheets, doc, compareAlternatives(doc, results, options.catalogue));
-  for (const sheet of ['cables', 'loads', 'boards'] as const) scheduleSheet(pdf, sheets, doc, results, sheet);
+  for (const sheet of ['cables', 'loads', 'boards', 'tests'] as const)
+    scheduleSheet(pdf, sheets, doc, results, sheet);
   findingsSheet(pdf, sheets, results);
   if (options.working !== false) workingSheet(pdf, sheets, doc, results);
   const pages = pdf.getNumberOfPages();

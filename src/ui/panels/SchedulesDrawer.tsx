@@ -9,7 +9,7 @@ import { download } from '../files/fileActions.ts';
 import './panels.css';
 import './tables.css';
 
-const SHEETS = (['cables', 'loads', 'boards'] as const).map((id) => ({
+const SHEETS = (['cables', 'loads', 'boards', 'tests'] as const).map((id) => ({
   id,
   label: SCHEDULE_SHEETS[id].title,
 }));
@@ -30,7 +30,13 @@ export function SchedulesDrawer() {
     () => (open ? SCHEDULE_SHEETS[sheet].build(doc, results) : null),
     [open, sheet, doc, results],
   );
-  if (!open || !schedule) return null;
+  // Columns to be filled in on site print in the pack and the CSV; on screen they would be empty.
+  const shown = useMemo(
+    () => schedule && { ...schedule, columns: schedule.columns.filter((c) => !c.onSite) },
+    [schedule],
+  );
+  if (!open || !schedule || !shown) return null;
+  const note = SCHEDULE_SHEETS[sheet].note;
 
   const counts = FILTER_KEYS.map(
     (k) => [k, schedule.rows.filter((r) => (r.status ?? 'none') === k).length] as const,
@@ -75,7 +81,11 @@ export function SchedulesDrawer() {
           onClick={() => {
             const { title, statusLabel } = SCHEDULE_SHEETS[sheet];
             const name = scheduleFileName(doc, title);
-            download(scheduleCsv(title, schedule, doc, results, statusLabel), name, 'text/csv;charset=utf-8');
+            download(
+              scheduleCsv(title, schedule, doc, results, statusLabel, SCHEDULE_SHEETS[sheet].note),
+              name,
+              'text/csv;charset=utf-8',
+            );
             notify(`Downloaded ${name}.`);
           }}
         >
@@ -86,9 +96,14 @@ export function SchedulesDrawer() {
         </button>
       </header>
       <div className="dl-drawer-body">
+        {note && (
+          <p className="dl-drawer-note" data-testid="schedule-note">
+            {note}
+          </p>
+        )}
         <ScheduleTable
           key={sheet}
-          schedule={schedule}
+          schedule={shown}
           filter={filter}
           selection={selection}
           onPick={reveal}

@@ -91,6 +91,7 @@ describe('the tender pack', () => {
       'Cable schedule',
       'Loads',
       'Board schedule',
+      'Expected test values',
       'Findings',
       'Working',
     ].map(firstPageOf);
@@ -123,8 +124,9 @@ describe('the tender pack', () => {
         }
       }
     }
-    // Units the schedules print survive the font.
+    // Units the schedules print survive the font; a sheet with a note prints it.
     expect(all).toContain('mm²');
+    expect(all).toContain(flat(SCHEDULE_SHEETS.tests.note!.slice(0, 80)));
   });
 
   test('every finding is listed with its message', () => {
