@@ -60,9 +60,20 @@ export const sitePlanSchema = z
     widthM: z.number().positive().max(MAX_PLAN_M).describe('Metres the plan image spans across.'),
   })
   .describe('The site plan that elements are placed on to measure cable lengths.');
+/** The most bends one cable's route may have on the plan. */
+export const MAX_ROUTE_BENDS = 50;
 export const planRouteSchema = z
-  .strictObject({ allowanceM: z.number().min(0).max(MAX_ALLOWANCE_M) })
-  .describe('Length measured on the site plan (rectilinear) plus this allowance, metres.');
+  .strictObject({
+    allowanceM: z.number().min(0).max(MAX_ALLOWANCE_M),
+    via: z
+      .array(planPointSchema)
+      .max(MAX_ROUTE_BENDS)
+      .optional()
+      .describe(
+        'Bends the route passes through, from the sending end; each leg is measured along x, then y.',
+      ),
+  })
+  .describe('Length measured on the site plan (rectilinear, through any bends) plus this allowance, metres.');
 const phaseCount = z.union([z.literal(1), z.literal(3)]);
 // Spelled out rather than built from PHASES / LOAD_KINDS so the inferred types are the literal
 // unions; the agreement check below catches any drift from types.ts.

@@ -38,12 +38,18 @@ export interface SitePlan {
 
 /**
  * A cable whose length is measured on the site plan: the rectilinear distance between its ends'
- * plan points (cables follow walls and containment, not the straight line) plus an allowance
- * for rises, drops and terminations. Its `lengthM` is kept equal to that by every edit.
+ * plan points (cables follow walls and containment, not the straight line), through its bends
+ * where it has any, plus an allowance for rises, drops and terminations. Its `lengthM` is kept
+ * equal to that by every edit.
  */
 export interface PlanRoute {
   /** Added to the measured distance: rises, drops, bends, terminations, metres. */
   allowanceM: number;
+  /**
+   * Points the route passes through on its way from the sending end to the receiving end (around
+   * a building, along a trench); each leg between them is measured along x, then y.
+   */
+  via?: PlanPoint[];
 }
 
 export type Earthing = 'TN-S' | 'TN-C-S' | 'TT';

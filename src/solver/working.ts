@@ -146,9 +146,12 @@ export function cableWorking(s: DropState, j: number): Working[] {
 
 /** Where a cable's length came from: typed, or measured on the site plan (with how). */
 function lengthSource(s: DropState, j: number, id: string): string {
-  const route = (s.cables[j] as unknown as { route?: { allowanceM?: unknown } }).route;
-  if (route && typeof route === 'object' && typeof route.allowanceM === 'number')
-    return `${field('cable', id, 'lengthM')}, measured on the site plan: rectilinear distance between its ends + ${route.allowanceM} m allowance, rounded up to 0.1 m`;
+  const route = (s.cables[j] as unknown as { route?: { allowanceM?: unknown; via?: unknown } }).route;
+  if (route && typeof route === 'object' && typeof route.allowanceM === 'number') {
+    const bends = Array.isArray(route.via) ? route.via.length : 0;
+    const through = bends > 0 ? ` through its ${bends} ${bends === 1 ? 'bend' : 'bends'}` : '';
+    return `${field('cable', id, 'lengthM')}, measured on the site plan: rectilinear distance between its ends${through} + ${route.allowanceM} m allowance, rounded up to 0.1 m`;
+  }
   return field('cable', id, 'lengthM');
 }
 

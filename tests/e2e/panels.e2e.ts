@@ -442,3 +442,54 @@ test('site plan: a part clicked in the tray lands on the plan, fed from the sele
   await expect(page.getByTestId(`plan-marker-${node.id}`).count()).resolves.toBe(0);
   expect(s.errors).toEqual([]);
 });
+
+test('site plan: a bend added to a route and dragged round an obstacle lengthens the cable as measured', async () => {
+  const ui = new Panels(s.page);
+  await ui.start();
+  const page = s.page;
+  await page.getByTestId('canvas-plan').click();
+  const label = page.getByTestId('plan-cable-C28');
+  await expect(label.textContent()).resolves.toBe('C28 · 38.0 m');
+  // C28 runs from J1 along x, then down to DB4: a double-click on its vertical leg puts a bend there.
+  const j1 = (await page.getByTestId('plan-marker-J1').boundingBox())!;
+  const db4 = (await page.getByTestId('plan-marker-DB4').boundingBox())!;
+  await page.mouse.dblclick(db4.x + db4.width / 2, (j1.y + j1.height / 2 + db4.y + db4.height / 2) / 2);
+  const bend = page.getByTestId('plan-bend-C28-0');
+  await bend.waitFor();
+  // On the route, so the length stands until the bend moves.
+  await expect(label.textContent()).resolves.toBe('C28 · 38.0 m');
+  const box = (await bend.boundingBox())!;
+  await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(box.x + 80, box.y + box.height / 2, { steps: 6 });
+  const during = Number(/([\d.]+) m/.exec((await label.textContent()) ?? '')![1]);
+  expect(during).toBeGreaterThan(38);
+  await page.mouse.up();
+  await page.waitForTimeout(700);
+  await screenshot(page, 'site-plan-bend');
+
+  // The saved route passes through the bend, and its length is the legs, each along x then y,
+  // plus the allowance (rounded up to 0.1 m).
+  const parsed = parseDocument(await readAutosave(page));
+  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+  const c28 = parsed.doc.cables.find((c) => c.id === 'C28')!;
+  expect(c28.route!.via).toHaveLength(1);
+  const at = new Map(parsed.doc.nodes.map((n) => [n.id, n.plan]));
+  const points = [at.get(c28.from)!, ...c28.route!.via!, at.get(c28.to)!];
+  let d = c28.route!.allowanceM;
+  for (let k = 1; k < points.length; k++)
+    d += Math.abs(points[k]!.xM - points[k - 1]!.xM) + Math.abs(points[k]!.yM - points[k - 1]!.yM);
+  expect(c28.lengthM).toBeGreaterThanOrEqual(d - 1e-9);
+  expect(c28.lengthM).toBeLessThan(d + 0.1 + 1e-9);
+  await expect(label.textContent()).resolves.toBe(`C28 · ${c28.lengthM.toFixed(1)} m`);
+  expect(solve(parsed.doc).cables.C28!.working.find((w) => w.key === 'drop')!.inputs[0]!.source).toMatch(
+    /through its 1 bend/,
+  );
+
+  // A double-click on the bend takes it away; undo brings it back.
+  await page.getByTestId('plan-bend-C28-0').dblclick();
+  await expect(label.textContent()).resolves.toBe('C28 · 38.0 m');
+  await page.getByRole('button', { name: 'Undo' }).click();
+  await expect(label.textContent()).resolves.toBe(`C28 · ${c28.lengthM.toFixed(1)} m`);
+  expect(s.errors).toEqual([]);
+});

@@ -7,7 +7,7 @@
 import type { jsPDF } from 'jspdf';
 import type { NodeElement, PlanPoint, ProjectDocument } from '../../model/types.ts';
 import type { Results } from '../../solver/results.ts';
-import { planDistanceM } from '../../model/planLengths.ts';
+import { routeDistanceM, routePoints } from '../../model/planLengths.ts';
 import { statusLook } from '../statusLook.ts';
 import { fmt } from '../format.ts';
 import { applyStatus } from './diagramDraw.ts';
@@ -38,7 +38,7 @@ export function rasterOf(pdf: jsPDF, doc: ProjectDocument): PlanPicture | null {
 }
 
 const NOTE =
-  'Cables are drawn along x, then y, between the plan points of their ends, the route their length is measured on: length = |Δx| + |Δy| + allowance, rounded up to 0.1 m. Solid, in the status style of the diagram: measured on the plan. Thin grey dashes: length typed, not measured here. Lengths in the schedules are the ones the figures use.';
+  'Cables are drawn along x, then y, between the plan points of their ends (leg by leg through any bends drawn on the route), the route their length is measured on: length = Σ (|Δx| + |Δy|) + allowance, rounded up to 0.1 m. Solid, in the status style of the diagram: measured on the plan. Thin grey dashes: length typed, not measured here. Lengths in the schedules are the ones the figures use.';
 
 function scaleBarM(mmPerM: number): number {
   for (const m of [1, 2, 5, 10, 20, 50, 100, 200, 500, 1000, 2000, 5000]) if (m * mmPerM >= 30) return m;
@@ -54,8 +54,9 @@ export function drawPlanSheet(
   const placed = doc.nodes.filter((n): n is NodeElement & { plan: PlanPoint } => n.plan !== undefined);
   const widthM = doc.plan?.widthM ?? 0;
   const heightM = picture && widthM > 0 ? (widthM * picture.heightPx) / picture.widthPx : 0;
-  const xs = placed.map((n) => n.plan.xM);
-  const ys = placed.map((n) => n.plan.yM);
+  const bends = doc.cables.flatMap((c) => c.route?.via ?? []);
+  const xs = [...placed.map((n) => n.plan.xM), ...bends.map((p) => p.xM)];
+  const ys = [...placed.map((n) => n.plan.yM), ...bends.map((p) => p.yM)];
   const pad = 2;
   const x0 = Math.min(picture ? 0 : Infinity, ...xs) - (picture ? 0 : pad);
   const y0 = Math.min(picture ? 0 : Infinity, ...ys) - (picture ? 0 : pad);
@@ -78,29 +79,27 @@ export function drawPlanSheet(
     const a = byId.get(c.from);
     const b = byId.get(c.to);
     if (!a || !b) continue;
-    const pa = at(a.plan);
-    const pb = at(b.plan);
+    const route = routePoints(c, a.plan, b.plan).map(at);
+    const pa = route[0]!;
+    const next = route[1]!;
     if (c.route) applyStatus(pdf, results.cables[c.id]?.status ?? null, k);
     else {
       pdf.setDrawColor(...GREY);
       pdf.setLineWidth(0.2);
       pdf.setLineDashPattern([0.8, 1], 0);
     }
-    pdf.lines(
-      [
-        [pb.x - pa.x, 0],
-        [0, pb.y - pa.y],
-      ],
-      pa.x,
-      pa.y,
-    );
+    // Each leg along x, then y, as it is measured.
+    const legs: [number, number][] = [];
+    for (let i = 1; i < route.length; i++)
+      legs.push([route[i]!.x - route[i - 1]!.x, 0], [0, route[i]!.y - route[i - 1]!.y]);
+    pdf.lines(legs, pa.x, pa.y);
     if (b.kind !== 'load')
       labels.push({
-        x: (pa.x + pb.x) / 2,
+        x: (pa.x + next.x) / 2,
         y: pa.y - 0.8,
         text: c.route
           ? `${c.id} ${fmt(c.lengthM, 1)} m`
-          : `${c.id} typed ${fmt(c.lengthM, 1)} m (plan ${fmt(planDistanceM(a.plan, b.plan), 1)} m)`,
+          : `${c.id} typed ${fmt(c.lengthM, 1)} m (plan ${fmt(routeDistanceM(routePoints(c, a.plan, b.plan)), 1)} m)`,
       });
   }
   pdf.setLineDashPattern([], 0);

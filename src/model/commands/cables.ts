@@ -1,7 +1,7 @@
 import type { Cable, Id, ProjectDocument } from '../types.ts';
 import { fail, ok, type CommandResult } from './result.ts';
 import { MAX_PARALLEL } from '../bounds.ts';
-import { MAX_ALLOWANCE_M } from '../schema.ts';
+import { MAX_ALLOWANCE_M, MAX_PLAN_M, MAX_ROUTE_BENDS } from '../schema.ts';
 import { describeCable, describeNode } from './describe.ts';
 import { nextIdFor, documentIds } from '../ids.ts';
 import { newCable } from '../defaults.ts';
@@ -145,6 +145,26 @@ export function updateCable(doc: ProjectDocument, id: Id, patch: CablePatch): Co
     return fail(
       `${describeCable(cable)}: the allowance on the plan length must be 0 to ${MAX_ALLOWANCE_M} metres; got ${patch.route.allowanceM}.`,
     );
+  }
+  const via = patch.route?.via;
+  if (via !== undefined) {
+    if (via.length > MAX_ROUTE_BENDS)
+      return fail(
+        `${describeCable(cable)}: a route may have at most ${MAX_ROUTE_BENDS} bends; got ${via.length}. Remove some.`,
+      );
+    const bad = via.findIndex(
+      (p) =>
+        !(
+          Number.isFinite(p.xM) &&
+          Number.isFinite(p.yM) &&
+          Math.abs(p.xM) <= MAX_PLAN_M &&
+          Math.abs(p.yM) <= MAX_PLAN_M
+        ),
+    );
+    if (bad >= 0)
+      return fail(
+        `${describeCable(cable)}: bend ${bad + 1} of the route must be two numbers of metres within ±${MAX_PLAN_M}; got ${via[bad]!.xM}, ${via[bad]!.yM}.`,
+      );
   }
   const merged: Record<string, unknown> = { ...cable };
   for (const [key, value] of Object.entries(patch)) {

@@ -1,8 +1,8 @@
 /** Placing elements on the site plan, and the plan itself. */
-import type { Id, NodeElement, PlanPoint, ProjectDocument, SitePlan } from '../types.ts';
+import type { Cable, Id, NodeElement, PlanPoint, ProjectDocument, SitePlan } from '../types.ts';
 import { MAX_PLAN_IMAGE_CHARS, MAX_PLAN_M } from '../schema.ts';
 import { withMeasuredLengths } from '../planLengths.ts';
-import { describeNode } from './describe.ts';
+import { describeCable, describeNode } from './describe.ts';
 import { fail, ok, type CommandResult } from './result.ts';
 
 function pointProblem(p: PlanPoint): string | null {
@@ -62,15 +62,26 @@ export function setSitePlan(doc: ProjectDocument, plan: SitePlan | null): Comman
 }
 
 function scaled(nodes: NodeElement[], factor: number): NodeElement[] {
-  // To the millimetre, so a rescale leaves no float noise in the file.
+  return nodes.map((n) => (n.plan ? { ...n, plan: scaledPoint(n.plan, factor) } : n));
+}
+
+/** A plan point moved with the picture, to the millimetre, so a rescale leaves no float noise in the file. */
+function scaledPoint(p: PlanPoint, factor: number): PlanPoint {
   const mm = (v: number) => Math.round(v * factor * 1000) / 1000;
-  return nodes.map((n) => (n.plan ? { ...n, plan: { xM: mm(n.plan.xM), yM: mm(n.plan.yM) } } : n));
+  return { xM: mm(p.xM), yM: mm(p.yM) };
+}
+
+/** Cables whose route bends, with the bends moved with the picture. */
+function scaledBends(cables: Cable[], factor: number): Cable[] {
+  return cables.map((c) =>
+    c.route?.via ? { ...c, route: { ...c.route, via: c.route.via.map((p) => scaledPoint(p, factor)) } } : c,
+  );
 }
 
 /**
- * Gives the plan picture a new width in metres (its scale) and moves every plan point with it,
- * in the current design and in every alternative, so each element stays on the same spot of the
- * picture; every cable measured on the plan is measured again. One undo step.
+ * Gives the plan picture a new width in metres (its scale) and moves every plan point with it (the
+ * elements' and the routes' bends), in the current design and in every alternative, so each stays
+ * on the same spot of the picture; every cable measured on the plan is measured again. One undo step.
  */
 export function scaleSitePlan(doc: ProjectDocument, widthM: number): CommandResult {
   if (!doc.plan) return fail('There is no site plan picture to scale; load one first.');
@@ -80,16 +91,27 @@ export function scaleSitePlan(doc: ProjectDocument, widthM: number): CommandResu
     );
   const factor = widthM / doc.plan.widthM;
   if (factor === 1) return ok(doc);
+  const beyond = (p: PlanPoint) =>
+    Math.abs(p.xM * factor) > MAX_PLAN_M || Math.abs(p.yM * factor) > MAX_PLAN_M;
   const outside = [doc.nodes, ...doc.alternatives.map((a) => a.nodes)]
     .flat()
-    .find(
-      (n) =>
-        n.plan && (Math.abs(n.plan.xM * factor) > MAX_PLAN_M || Math.abs(n.plan.yM * factor) > MAX_PLAN_M),
-    );
+    .find((n) => n.plan && beyond(n.plan));
   if (outside) return fail(`${describeNode(outside)} would lie beyond ±${MAX_PLAN_M} m at that scale.`);
-  const current = withMeasuredLengths({ ...doc, nodes: scaled(doc.nodes, factor) });
+  const bent = [doc.cables, ...doc.alternatives.map((a) => a.cables)]
+    .flat()
+    .find((c) => c.route?.via?.some(beyond));
+  if (bent) return fail(`A bend of ${describeCable(bent)} would lie beyond ±${MAX_PLAN_M} m at that scale.`);
+  const current = withMeasuredLengths({
+    ...doc,
+    nodes: scaled(doc.nodes, factor),
+    cables: scaledBends(doc.cables, factor),
+  });
   const alternatives = doc.alternatives.map((alt) => {
-    const measured = withMeasuredLengths({ ...doc, nodes: scaled(alt.nodes, factor), cables: alt.cables });
+    const measured = withMeasuredLengths({
+      ...doc,
+      nodes: scaled(alt.nodes, factor),
+      cables: scaledBends(alt.cables, factor),
+    });
     return { ...alt, nodes: measured.nodes, cables: measured.cables };
   });
   return ok({ ...current, alternatives, plan: { ...doc.plan, widthM } });

@@ -71,6 +71,13 @@ export function splitCable(doc: ProjectDocument, id: Id, ratio = 0.5): CommandRe
     lengthM: downLengthM,
   });
   delete onward.device;
+  // The new junction has no place on the plan yet, so the route's bends cannot be shared out
+  // between the two parts: both keep the allowance and lose the bends, to be bent again once the
+  // junction is placed.
+  if (cable.route?.via) {
+    upstream.route = { allowanceM: cable.route.allowanceM };
+    onward.route = { allowanceM: cable.route.allowanceM };
+  }
   const cables = doc.cables.slice();
   cables.splice(index, 1, upstream, onward);
   return ok({ ...withJunction, cables }, [junctionId, onwardId]);

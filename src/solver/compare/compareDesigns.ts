@@ -122,8 +122,17 @@ function num(v: unknown): string {
   return typeof v === 'number' && Number.isFinite(v) ? String(Number(v.toPrecision(6))) : String(v);
 }
 
+function isPlanPoint(v: unknown): v is { xM: number; yM: number } {
+  return typeof v === 'object' && v !== null && 'xM' in v && 'yM' in v;
+}
+
 function text(v: unknown, unit = ''): string {
   if (v === undefined || v === null) return 'none';
+  // A route's bends: how many, and where on the plan.
+  if (Array.isArray(v) && v.every(isPlanPoint))
+    return v.length === 0
+      ? 'none'
+      : `${v.length} at ${v.map((p) => `(${num(p.xM)}, ${num(p.yM)})`).join(' ')} m`;
   if (typeof v === 'number') return unit ? `${num(v)} ${unit}` : num(v);
   if (typeof v === 'boolean') return v ? 'yes' : 'no';
   if (typeof v === 'object') return JSON.stringify(v);
@@ -138,6 +147,7 @@ const CABLE_FIELDS: readonly FieldSpec[] = [
   ['to', 'feeds'],
   ['lengthM', 'length', 'm'],
   ['route.allowanceM', 'allowance on the plan length', 'm'],
+  ['route.via', 'bends on the plan route'],
   ['sizeMm2', 'size', 'mm²'],
   ['material', 'material'],
   ['insulation', 'insulation'],
@@ -212,7 +222,10 @@ function fieldChanges(a: unknown, b: unknown, fields: readonly FieldSpec[]): Fie
     const va = valueAt(a, path);
     const vb = valueAt(b, path);
     if (va === vb || (Number.isNaN(va) && Number.isNaN(vb))) continue;
-    out.push({ field: path, label, a: text(va, unit), b: text(vb, unit) });
+    // Lists (a route's bends) are compared by what they say, not by identity.
+    const ta = text(va, unit);
+    const tb = text(vb, unit);
+    if (ta !== tb) out.push({ field: path, label, a: ta, b: tb });
   }
   return out;
 }

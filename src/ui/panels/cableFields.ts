@@ -103,10 +103,10 @@ export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
         label: 'Added to the plan length',
         unit: 'm',
         rule: { min: 0, max: 1000 },
-        hint: 'The length is measured on the site plan (along x, then y, between its ends) plus this allowance for rises, drops and terminations.',
+        hint: 'The length is measured on the site plan (along x, then y, between its ends and through any bends of its route) plus this allowance for rises, drops and terminations.',
         shown: (c) => c.route !== undefined,
         get: (c) => c.route?.allowanceM,
-        set: (_c, allowanceM) => ({ route: { allowanceM } }),
+        set: (c, allowanceM) => ({ route: { ...c.route, allowanceM } }),
       },
       {
         kind: 'choice',

@@ -19,27 +19,57 @@ import { useEditor, editorStore } from '../../store/editorStore.ts';
 import { safeSolve } from '../../store/safeSolve.ts';
 import { applyCommand } from '../../model/commands.ts';
 import type { Id, PlanPoint } from '../../model/types.ts';
-import { MarkerView, PictureView, PlanCableView } from './PlanParts.tsx';
+import { BendView, MarkerView, PictureView, PlanCableView } from './PlanParts.tsx';
 import {
+  BEND,
   MARKER,
   PICTURE_ID,
   PX_PER_M,
+  bendIndex,
+  parseBendId,
   planEdges,
   planNodes,
   type PlanEdge,
   type PlanNode,
 } from './planFlow.ts';
+import { routePoints } from '../../model/planLengths.ts';
+import type { Cable, ProjectDocument } from '../../model/types.ts';
+import type { Command } from '../../model/commands.ts';
 import { readPlanPicture } from './planPicture.ts';
 import { MAX_ALLOWANCE_M } from '../../model/schema.ts';
 import './plan.css';
 
-const nodeTypes = { marker: MarkerView, picture: PictureView };
+const nodeTypes = { marker: MarkerView, picture: PictureView, bend: BendView };
 const edgeTypes = { planCable: PlanCableView };
 
-/** A plan point to 0.1 m. */
-function toPoint(x: number, y: number): PlanPoint {
+/** A plan point to 0.1 m, from the top-left corner of a box `size` pixels across centred on it. */
+function toPoint(x: number, y: number, size = MARKER): PlanPoint {
   const r = (v: number) => Math.round(v * 10) / 10;
-  return { xM: r((x + MARKER / 2) / PX_PER_M), yM: r((y + MARKER / 2) / PX_PER_M) };
+  return { xM: r((x + size / 2) / PX_PER_M), yM: r((y + size / 2) / PX_PER_M) };
+}
+
+/**
+ * The command a drag on the plan makes: markers moved (one placeOnPlan), or a bend moved (its
+ * cable's route with the bend's new place). A bend is not selectable, so it moves on its own.
+ */
+function dragCommand(doc: ProjectDocument, moved: Record<Id, PlanPoint>): Command | null {
+  const markers: { id: Id; plan: PlanPoint }[] = [];
+  let cable: Cable | undefined;
+  let via: PlanPoint[] | undefined;
+  for (const [id, plan] of Object.entries(moved)) {
+    const bend = parseBendId(id);
+    if (!bend) {
+      markers.push({ id, plan });
+      continue;
+    }
+    cable ??= doc.cables.find((c) => c.id === bend.cableId);
+    if (!cable?.route?.via || cable.id !== bend.cableId) continue;
+    via ??= cable.route.via.slice();
+    if (bend.index < via.length) via[bend.index] = plan;
+  }
+  if (cable?.route && via)
+    return { type: 'updateCable', id: cable.id, patch: { route: { ...cable.route, via } } };
+  return markers.length > 0 ? { type: 'placeOnPlan', moves: markers } : null;
 }
 
 /** Two clicks on the plan and the real distance between them: the plan's scale, the usual way. */
@@ -142,6 +172,9 @@ function PlanBar({
   const file = useRef<HTMLInputElement>(null);
   const unplaced = doc.nodes.filter((n) => !n.plan);
   const selectedPlaced = doc.nodes.filter((n) => n.plan && selection.includes(n.id));
+  // One measured cable picked: how to bend its route.
+  const picked = selection.length === 1 ? doc.cables.find((c) => c.id === selection[0]) : undefined;
+  const routed = picked?.route ? picked : undefined;
   const placedIds = new Set(doc.nodes.filter((n) => n.plan).map((n) => n.id));
   const measurable = doc.cables.filter((c) => placedIds.has(c.from) && placedIds.has(c.to));
   // With a selection, the selected cables (a new allowance for measured ones too); without, only
@@ -220,7 +253,12 @@ function PlanBar({
           onClick={() => {
             const out = dispatch({
               type: 'applyProposals',
-              changes: chosen.map((c) => ({ target: 'cable', id: c.id, patch: { route: { allowanceM } } })),
+              // A new allowance keeps the bends a route already has.
+              changes: chosen.map((c) => ({
+                target: 'cable',
+                id: c.id,
+                patch: { route: { ...c.route, allowanceM } },
+              })),
             });
             if (out.ok)
               notify(
@@ -246,6 +284,33 @@ function PlanBar({
             Take {selectedPlaced.length === 1 ? selectedPlaced[0]!.id : `${selectedPlaced.length} elements`}{' '}
             off the plan
           </button>
+        </div>
+      )}
+      {routed && (
+        <div className="pl-row pl-hint-row" data-testid="plan-route-hint">
+          <span>
+            {routed.id} is measured on the plan
+            {routed.route?.via
+              ? ` through ${routed.route.via.length} ${routed.route.via.length === 1 ? 'bend' : 'bends'}`
+              : ''}
+            . Double-click its route to add a bend, drag a bend to route it round an obstacle, double-click a
+            bend to take it away.
+          </span>
+          {routed.route?.via && (
+            <button
+              type="button"
+              data-testid="plan-straighten"
+              onClick={() =>
+                dispatch({
+                  type: 'updateCable',
+                  id: routed.id,
+                  patch: { route: { allowanceM: routed.route!.allowanceM } },
+                })
+              }
+            >
+              Remove the bends
+            </button>
+          )}
         </div>
       )}
       {unplaced.length > 0 && (
@@ -303,13 +368,11 @@ function PlanView() {
   // The picture's height comes from the browser (its aspect ratio); everything else is fixed.
   const [pictureHeight, setPictureHeight] = useState<number | null>(null);
 
-  // While a marker moves, the cables measured on the plan are measured again and solved live.
+  // While a marker or a bend moves, the cables measured on the plan are measured again and solved live.
   const live = useMemo(() => {
-    if (!drag) return { doc, results };
-    const out = applyCommand(doc, {
-      type: 'placeOnPlan',
-      moves: Object.entries(drag).map(([id, plan]) => ({ id, plan })),
-    });
+    const command = drag && dragCommand(doc, drag);
+    if (!command) return { doc, results };
+    const out = applyCommand(doc, command);
     return out.ok ? { doc: out.doc, results: safeSolve(out.doc) } : { doc, results };
   }, [doc, results, drag]);
 
@@ -326,7 +389,7 @@ function PlanView() {
     for (const c of changes) {
       if (c.type === 'position' && c.position && c.dragging) {
         next ??= {};
-        next[c.id] = toPoint(c.position.x, c.position.y);
+        next[c.id] = toPoint(c.position.x, c.position.y, parseBendId(c.id) ? BEND : MARKER);
       }
       if (c.type === 'dimensions' && c.id === PICTURE_ID && c.dimensions)
         setPictureHeight(c.dimensions.height);
@@ -344,12 +407,47 @@ function PlanView() {
 
   const onNodeDragStop = useCallback(() => {
     setDrag((d) => {
-      if (d)
-        editorStore.getState().dispatch({
-          type: 'placeOnPlan',
-          moves: Object.entries(d).map(([id, plan]) => ({ id, plan })),
-        });
+      const store = editorStore.getState();
+      const command = d && dragCommand(store.doc, d);
+      if (command) store.dispatch(command);
       return null;
+    });
+  }, []);
+
+  // A double-click on a measured route puts a bend there (on the route, so the length stays until
+  // the bend is dragged); a double-click on a bend takes it away.
+  const onEdgeDoubleClick = useCallback(
+    (e: React.MouseEvent, edge: PlanEdge) => {
+      const store = editorStore.getState();
+      const cable = store.doc.cables.find((c) => c.id === edge.id);
+      const a = store.doc.nodes.find((n) => n.id === cable?.from)?.plan;
+      const b = store.doc.nodes.find((n) => n.id === cable?.to)?.plan;
+      if (!cable || !a || !b) return;
+      if (!cable.route) {
+        store.notify(`Measure ${cable.id} on the plan first (the Measure button); its length is typed.`);
+        return;
+      }
+      const px = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });
+      const p = toPoint(px.x, px.y, 0);
+      const via = (cable.route.via ?? []).slice();
+      via.splice(bendIndex(routePoints(cable, a, b), p), 0, p);
+      store.dispatch({ type: 'updateCable', id: cable.id, patch: { route: { ...cable.route, via } } });
+      store.setSelection([cable.id]);
+    },
+    [flow],
+  );
+  const onNodeDoubleClick = useCallback((_e: React.MouseEvent, node: PlanNode) => {
+    const bend = parseBendId(node.id);
+    if (!bend) return;
+    const store = editorStore.getState();
+    const cable = store.doc.cables.find((c) => c.id === bend.cableId);
+    if (!cable?.route?.via) return;
+    const via = cable.route.via.filter((_p, k) => k !== bend.index);
+    const { via: _dropped, ...route } = cable.route;
+    store.dispatch({
+      type: 'updateCable',
+      id: cable.id,
+      patch: { route: via.length > 0 ? { ...route, via } : route },
     });
   }, []);
 
@@ -362,6 +460,9 @@ function PlanView() {
         edgeTypes={edgeTypes}
         onNodesChange={onNodesChange}
         onEdgeClick={(_e, edge) => editorStore.getState().setSelection([edge.id])}
+        onEdgeDoubleClick={onEdgeDoubleClick}
+        onNodeDoubleClick={onNodeDoubleClick}
+        zoomOnDoubleClick={false}
         onPaneClick={(e) => {
           if (pick && pick.points.length < 2) {
             const p = flow.screenToFlowPosition({ x: e.clientX, y: e.clientY });

@@ -1,8 +1,8 @@
-/** The plan's node and edge views: the picture, an element's marker, a cable along its route. */
+/** The plan's node and edge views: the picture, an element's marker, a route's bend, a cable along its route. */
 import { BaseEdge, EdgeLabelRenderer, Handle, Position, type EdgeProps, type NodeProps } from '@xyflow/react';
 import { statusLook } from '../../export/statusLook.ts';
 import { fmt } from '../../export/format.ts';
-import type { MarkerNode, PictureNode, PlanEdge } from './planFlow.ts';
+import type { BendNode, MarkerNode, PictureNode, PlanEdge } from './planFlow.ts';
 
 const KIND_MARK: Record<string, string> = { supply: 'S', board: 'DB', junction: 'J', load: 'L' };
 
@@ -45,6 +45,30 @@ export function MarkerView({ data, selected }: NodeProps<MarkerNode>) {
   );
 }
 
+export function BendView({ data }: NodeProps<BendNode>) {
+  return (
+    <div
+      className="pl-bend"
+      title={`Bend ${data.index + 1} of cable ${data.cableId}: drag to move it, double-click to take it away`}
+      data-testid={`plan-bend-${data.cableId}-${data.index}`}
+    />
+  );
+}
+
+/** The SVG path of a route: from the start, each leg along x, then y, through every point. */
+export function routePath(
+  start: { x: number; y: number },
+  points: readonly { x: number; y: number }[],
+): string {
+  let d = `M ${start.x} ${start.y}`;
+  let y = start.y;
+  for (const p of points) {
+    d += ` L ${p.x} ${y} L ${p.x} ${p.y}`;
+    y = p.y;
+  }
+  return d;
+}
+
 export function PlanCableView({
   id,
   sourceX,
@@ -55,10 +79,11 @@ export function PlanCableView({
   selected,
 }: EdgeProps<PlanEdge>) {
   if (!data) return null;
-  // Both handles sit at the markers' centres, the plan points.
+  // Both handles sit at the markers' centres, the plan points; the bends lie between.
   const sy = sourceY;
-  const ty = targetY;
-  const path = `M ${sourceX} ${sy} L ${targetX} ${sy} L ${targetX} ${ty}`;
+  const path = routePath({ x: sourceX, y: sy }, [...data.bends, { x: targetX, y: targetY }]);
+  // The label sits on the first leg.
+  const firstX = data.bends[0]?.x ?? targetX;
   const look = statusLook(data.status);
   const measured = data.cable.route !== undefined;
   const text = measured
@@ -80,7 +105,7 @@ export function PlanCableView({
           <div
             className={`pl-cable-label${measured ? '' : ' is-typed'}`}
             style={{
-              transform: `translate(-50%, -100%) translate(${(sourceX + targetX) / 2}px, ${sy - 2}px)`,
+              transform: `translate(-50%, -100%) translate(${(sourceX + firstX) / 2}px, ${sy - 2}px)`,
             }}
             data-testid={`plan-cable-${id}`}
           >

@@ -44,7 +44,12 @@ describe('lengths measured on the site plan', () => {
     expect(cable(doc, 'C1').lengthM).toBe(20); // 12 + 5 + 3
     expect(cable(doc, 'C2').lengthM).toBe(14.1); // 8 + 4 + 2.04 = 14.04 → 14.1
     const byId = new Map(doc.nodes.map((n) => [n.id, n]));
-    expect(measureOnPlan(cable(doc, 'C2'), byId)).toEqual({ distanceM: 12, allowanceM: 2.04, lengthM: 14.1 });
+    expect(measureOnPlan(cable(doc, 'C2'), byId)).toEqual({
+      distanceM: 12,
+      bends: 0,
+      allowanceM: 2.04,
+      lengthM: 14.1,
+    });
   });
 
   test('moving a board on the plan lengthens its sub-main and shortens its final, in one step', () => {
@@ -173,5 +178,70 @@ describe('lengths measured on the site plan', () => {
     const bad = applyCommand(doc, { type: 'addNode', node, feedFrom: 'DB1', routeAllowanceM: -2 });
     expect(bad.ok).toBe(false);
     if (!bad.ok) expect(bad.error).toMatch(/allowance .* must be 0 to 1000 metres; got -2/);
+  });
+
+  test('a route through bends is measured leg by leg, each along x then y', () => {
+    // S1 (0, 0) → (0, 10) → (12, 10) → DB1 (12, 5): 10 + 12 + 5 = 27 m, plus the 3 m allowance.
+    const via = [
+      { xM: 0, yM: 10 },
+      { xM: 12, yM: 10 },
+    ];
+    let doc = run(placed(), { type: 'updateCable', id: 'C1', patch: { route: { allowanceM: 3, via } } });
+    expect(cable(doc, 'C1').lengthM).toBe(30);
+    const byId = new Map(doc.nodes.map((n) => [n.id, n]));
+    expect(measureOnPlan(cable(doc, 'C1'), byId)).toEqual({
+      distanceM: 27,
+      bends: 2,
+      allowanceM: 3,
+      lengthM: 30,
+    });
+    // Moving the board measures through the same bends: (0,0)→(0,10) 10, →(12,10) 12, →(20,5) 8 + 5.
+    doc = run(doc, { type: 'placeOnPlan', moves: [{ id: 'DB1', plan: { xM: 20, yM: 5 } }] });
+    expect(cable(doc, 'C1').lengthM).toBe(38);
+    // A new scale moves the bends with the picture: everything doubles but the allowance.
+    doc = run(doc, { type: 'setSitePlan', plan: { image: PIXEL, widthM: 40 } });
+    const scaled = run(doc, { type: 'scaleSitePlan', widthM: 80 });
+    expect(cable(scaled, 'C1').route!.via).toEqual([
+      { xM: 0, yM: 20 },
+      { xM: 24, yM: 20 },
+    ]);
+    expect(cable(scaled, 'C1').lengthM).toBe(2 * 35 + 3);
+    // Splitting the cable leaves both parts measured without bends (the junction is not placed yet).
+    const split = run(doc, { type: 'splitCable', id: 'C1' });
+    for (const c of split.cables.filter((x) => x.id === 'C1' || x.from.startsWith('J')))
+      expect(c.route).toEqual({ allowanceM: 3 });
+    // Saved and read back with its bends.
+    const back = parseDocument(serializeDocument(doc));
+    expect(back.ok && cable(back.doc, 'C1').route).toEqual({ allowanceM: 3, via });
+  });
+
+  test('bad bends are refused with the bend and the fix; a file with a bad bend names the field', () => {
+    const err = (via: { xM: number; yM: number }[]) => {
+      const out = applyCommand(placed(), {
+        type: 'updateCable',
+        id: 'C1',
+        patch: { route: { allowanceM: 3, via } },
+      });
+      return out.ok ? '' : out.error;
+    };
+    expect(
+      err([
+        { xM: 1, yM: 1 },
+        { xM: Infinity, yM: 0 },
+      ]),
+    ).toMatch(/cable C1.*bend 2 of the route must be two numbers of metres within ±100000; got Infinity, 0/);
+    expect(err(Array.from({ length: 51 }, (_, k) => ({ xM: k, yM: 0 })))).toMatch(
+      /at most 50 bends; got 51\. Remove some/,
+    );
+    const doc = run(placed(), {
+      type: 'updateCable',
+      id: 'C1',
+      patch: { route: { allowanceM: 3, via: [{ xM: 0, yM: 10 }] } },
+    });
+    const bad = JSON.parse(serializeDocument(doc));
+    bad.cables.find((c: { id: string }) => c.id === 'C1').route.via[0].yM = 'north';
+    const r = parseDocument(JSON.stringify(bad));
+    expect(r.ok).toBe(false);
+    expect(r.ok ? '' : r.errors.join('\n')).toMatch(/cable C1.*route\.via\.0\.yM/);
   });
 });

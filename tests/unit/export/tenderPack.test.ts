@@ -186,7 +186,7 @@ describe('the tender pack', () => {
     for (const n of doc.nodes) expect(sheet).toContain(n.id);
     for (const c of doc.cables.filter((x) => doc.nodes.find((n) => n.id === x.to)?.kind !== 'load'))
       expect(sheet).toContain(`${c.id} ${c.lengthM.toFixed(1)} m`);
-    expect(sheet).toContain('length = |Δx| + |Δy| + allowance, rounded up to 0.1 m');
+    expect(sheet).toContain('length = Σ (|Δx| + |Δy|) + allowance, rounded up to 0.1 m');
     // The demo's picture is SVG, which the pack made outside the editor says it leaves out.
     expect(sheet).toContain('make the pack in the editor to include it');
   });

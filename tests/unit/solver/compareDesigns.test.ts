@@ -135,6 +135,35 @@ describe('compareDesigns', () => {
     });
   });
 
+  test('a route bent another way on the plan is told by its bends; equal bends are no change', () => {
+    const bent = (via: { xM: number; yM: number }[]) => {
+      const doc = outbuilding(16, 16);
+      doc.cables[0] = { ...doc.cables[0]!, route: { allowanceM: 2, via } };
+      return doc;
+    };
+    const a = side('A', bent([{ xM: 10, yM: 0 }]));
+    const same = compareDesigns(a, side('Same', bent([{ xM: 10, yM: 0 }])));
+    expect(same.cables).toEqual([]);
+    const other = compareDesigns(
+      a,
+      side(
+        'B',
+        bent([
+          { xM: 10, yM: 5 },
+          { xM: 20, yM: 5 },
+        ]),
+      ),
+    );
+    expect(other.cables[0]!.changes).toEqual([
+      {
+        field: 'route.via',
+        label: 'bends on the plan route',
+        a: '1 at (10, 0) m',
+        b: '2 at (10, 5) (20, 5) m',
+      },
+    ]);
+  });
+
   test('a broken design compares without throwing; its unsolved loads are counted as such', () => {
     const broken = outbuilding(6, 2.5);
     broken.cables = broken.cables.filter((x) => x.id !== 'SM');
