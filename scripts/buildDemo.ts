@@ -33,6 +33,23 @@ doc.details = {
     'Demo project (invented scenario). Public three-phase supply at the workshop; the timber store is ' +
     'fed across the yard by a buried sub-main that changes size at the yard junction. Ze and fault ' +
     'level are the supply company declared maxima and must be confirmed on site.',
+  revisions: [
+    {
+      revision: 'A',
+      date: '2025-02-21',
+      description: 'First issue, for comment',
+      by: 'D. Marsh',
+      checked: '',
+    },
+    {
+      revision: 'B',
+      date: '2025-03-14',
+      description:
+        'Issued for tender: timber store fed across the yard, cable lengths measured on the site plan',
+      by: 'D. Marsh',
+      checked: 'R. Penhale',
+    },
+  ],
 };
 
 const supply = doc.nodes[0]!;

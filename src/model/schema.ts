@@ -216,6 +216,18 @@ export const cableSchema = z.strictObject({
 
 export const cableDefaultsSchema = z.strictObject(cableBody);
 
+/** The most rows a project's revision table may hold. */
+export const MAX_REVISIONS = 200;
+export const revisionSchema = z
+  .strictObject({
+    revision: z.string().max(40),
+    date: z.string().max(40),
+    description: z.string().max(1000),
+    by: name(),
+    checked: name(),
+  })
+  .describe('One issue of the design: revision, date, what changed, by whom, checked by whom.');
+
 export const detailsSchema = z.strictObject({
   title: name(),
   client: name(),
@@ -225,6 +237,11 @@ export const detailsSchema = z.strictObject({
   author: name(),
   date: z.string().max(40),
   notes: z.string().max(20_000),
+  revisions: z
+    .array(revisionSchema)
+    .max(MAX_REVISIONS)
+    .optional()
+    .describe('Every issue of the design, oldest first; the last is the current revision.'),
 });
 
 export const settingsSchema = z.strictObject({

@@ -242,6 +242,17 @@ export interface Cable {
   route?: PlanRoute;
 }
 
+/** One issue of the design: a row of the revision table the tender pack prints. */
+export interface RevisionEntry {
+  revision: string;
+  /** Year-month-day. */
+  date: string;
+  /** What changed in this issue. */
+  description: string;
+  by: string;
+  checked: string;
+}
+
 export interface ProjectDetails {
   title: string;
   client: string;
@@ -251,6 +262,8 @@ export interface ProjectDetails {
   author: string;
   date: string;
   notes: string;
+  /** Every issue of the design, oldest first; the last is the current revision. */
+  revisions?: RevisionEntry[];
 }
 
 export type LimitProfileId = 'iecPublic' | 'iecPrivate' | 'nec' | 'asnzs' | 'custom';

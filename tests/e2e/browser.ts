@@ -54,7 +54,11 @@ export function readAutosave(page: Page): Promise<string> {
         const req = indexedDB.open('dropline', 1);
         req.onsuccess = () => {
           const get = req.result.transaction('autosave').objectStore('autosave').get('current');
-          get.onsuccess = () => resolve((get.result as { text: string }).text);
+          // No autosave yet fails at once instead of leaving the test to time out.
+          get.onsuccess = () =>
+            get.result
+              ? resolve((get.result as { text: string }).text)
+              : reject(new Error('no autosave yet: wait for the edit to be saved'));
           get.onerror = () => reject(get.error);
         };
         req.onerror = () => reject(req.error);

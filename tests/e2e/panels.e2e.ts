@@ -255,13 +255,27 @@ test('the findings list goes to an element; help lists the shortcuts; project de
   ).resolves.toBeGreaterThan(5);
   await screenshot(s.page, 'panels-help');
   await s.page.keyboard.press('Escape');
+  // The demo keeps a revision table (A, B): a new row is the next revision, and it needs a description.
   await s.page.getByRole('button', { name: 'Project', exact: true }).click();
-  const rev = s.page.getByTestId('project-dialog').getByLabel('Revision');
-  await rev.fill('P2');
+  await s.page.getByTestId('rev-add').click();
+  await expect(s.page.getByTestId('rev-2-revision').inputValue()).resolves.toBe('C');
+  await s.page.getByTestId('project-save').click();
+  await expect(s.page.getByTestId('project-dialog').textContent()).resolves.toContain(
+    'Revision C: say what changed in this issue.',
+  );
+  await s.page.getByTestId('rev-2-description').fill('Yard sub-main in 35 mm²');
+  await screenshot(s.page, 'panels-revisions');
   await s.page.getByTestId('project-save').click();
   await expect(s.page.getByTestId('project-dialog').count()).resolves.toBe(0);
+  await s.page.waitForTimeout(700); // the autosave follows an edit after a short pause
+  const saved = parseDocument(await readAutosave(s.page));
+  if (!saved.ok) throw new Error(saved.errors.join('\n'));
+  expect(saved.doc.details.revision).toBe('C');
+  expect(saved.doc.details.revisions!.map((r) => r.revision)).toEqual(['A', 'B', 'C']);
+  expect(saved.doc.details.revisions![2]!.description).toBe('Yard sub-main in 35 mm²');
+  await s.page.getByRole('button', { name: 'Undo' }).click();
   await s.page.getByRole('button', { name: 'Project', exact: true }).click();
-  await expect(s.page.getByTestId('project-dialog').getByLabel('Revision').inputValue()).resolves.toBe('P2');
+  await expect(s.page.getByTestId('rev-2-revision').count()).resolves.toBe(0);
   expect(s.errors).toEqual([]);
 });
 

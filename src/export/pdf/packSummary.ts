@@ -87,6 +87,21 @@ export function summarySheet(pdf: jsPDF, doc: ProjectDocument, results: Results)
   const right = CONTENT.x + colW + 12;
   let y = CONTENT.y;
   y = block(pdf, left, y, colW, 'Project details', [...projectDetailRows(d), ['Notes', d.notes]]);
+  // The revision table, newest first as drawings list it; every figure in this pack is of the last.
+  if (d.revisions && d.revisions.length > 0)
+    y = block(
+      pdf,
+      left,
+      y,
+      colW,
+      'Revisions',
+      [...d.revisions]
+        .reverse()
+        .map((r) => [
+          `${r.revision}  ${r.date}`,
+          `${r.description}${r.by ? ` (by ${r.by}${r.checked ? `, checked ${r.checked}` : ''})` : r.checked ? ` (checked ${r.checked})` : ''}`,
+        ]),
+    );
   const counts = countStatuses(results);
   const errors = results.findings.filter((f) => f.severity === 'error').length;
   const warnings = results.findings.length - errors;

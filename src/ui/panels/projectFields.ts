@@ -4,7 +4,11 @@ import type { FieldGroup, TextField } from './fieldSpec.ts';
 import { LIMIT_PROFILE_OPTIONS } from './options.ts';
 
 type D = ProjectDetails;
-const detail = (key: keyof D & string, label: string, hint?: string): TextField<D, Partial<D>> => ({
+const detail = (
+  key: Exclude<keyof D, 'revisions'> & string,
+  label: string,
+  hint?: string,
+): TextField<D, Partial<D>> => ({
   kind: 'text',
   key,
   label,
@@ -27,7 +31,8 @@ export const DETAILS_FIELDS: FieldGroup<D, Partial<D>>[] = [
   {
     title: 'Issue',
     fields: [
-      detail('revision', 'Revision'),
+      // With a revision table, its last row gives the revision and the date.
+      { ...detail('revision', 'Revision'), shown: (d) => !d.revisions?.length },
       detail('author', 'Author'),
       {
         kind: 'text',
@@ -35,6 +40,7 @@ export const DETAILS_FIELDS: FieldGroup<D, Partial<D>>[] = [
         label: 'Date',
         hint: 'Year-month-day, e.g. 2025-03-14.',
         check: dateProblem,
+        shown: (d) => !d.revisions?.length,
         get: (d) => d.date,
         set: (_d, v) => ({ date: v }),
       },

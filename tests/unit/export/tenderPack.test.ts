@@ -106,6 +106,10 @@ describe('the tender pack', () => {
     for (const r of results.references) expect(summary).toContain(flat(r));
     for (const c of CAUTIONS) expect(summary).toContain(flat(c));
     for (const m of PACK_METHODS) expect(summary).toContain(flat(m));
+    // The demo's revision table, every row.
+    expect(summary).toContain('Revisions');
+    for (const r of doc.details.revisions ?? []) expect(summary).toContain(flat(r.description));
+    expect(doc.details.revisions?.length).toBeGreaterThan(1);
     const loads = Object.values(results.loads);
     const over = loads.filter((l) => l.status === 'over').length;
     expect(summary).toContain(`${loads.length}: `);
