@@ -121,6 +121,12 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
       'Line plus protective conductor resistance of the segment at operating temperature, ohms',
     ),
     col('method', 'Method', 'Reference installation method', false),
+    col(
+      'run',
+      'Run',
+      'The shared containment run the cable is grouped in, and the circuits it holds (they set the grouping factor)',
+      false,
+    ),
     col('ipfSend', 'Ipf send kA', 'Prospective fault current at the sending end, kA'),
     col('zsEnd', 'Zs end Ω', 'Earth fault loop impedance at the receiving end, conductors hot, ohms'),
     col('tReq', 't req s', 'Disconnection time required for the circuit, seconds'),
@@ -160,6 +166,11 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
         use: num(p?.capacityUse === null || p?.capacityUse === undefined ? null : p.capacityUse * 100, 0),
         r1r2: num(p?.r1r2HotOhm, 3),
         method: txt(c.installation ? (METHOD_SHORT[c.installation.method] ?? c.installation.method) : '–'),
+        run: txt(
+          c.installation?.run !== undefined
+            ? `${c.installation.run} (${c.installation.groupedCircuits})`
+            : '–',
+        ),
         ipfSend: num(
           results.nodes[c.from]?.protection
             ? results.nodes[c.from]!.protection!.fault.maxA / 1000

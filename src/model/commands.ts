@@ -7,6 +7,7 @@
  *   const out = applyCommand(doc, { type: 'connectCable', from: 'B1', to: 'L3' });
  *   if (out.ok) doc = out.doc; else show(out.error);
  */
+import { withRunCounts } from './runs.ts';
 import type {
   Cable,
   Id,
@@ -87,8 +88,18 @@ export type Command =
 
 export type CommandType = Command['type'];
 
-/** Applies a command to a document without touching it; a refused command says why. */
+/**
+ * Applies a command to a document without touching it; a refused command says why. Every edit
+ * keeps the circuits counted in shared runs (runs.ts); opening a document takes it as written.
+ */
 export function applyCommand(doc: ProjectDocument, command: Command): CommandResult {
+  const out = applyOne(doc, command);
+  if (!out.ok || command.type === 'replaceDocument') return out;
+  const counted = withRunCounts(out.doc);
+  return counted === out.doc ? out : { ...out, doc: counted };
+}
+
+function applyOne(doc: ProjectDocument, command: Command): CommandResult {
   switch (command.type) {
     case 'addNode':
       return addNode(doc, command.node, command.feedFrom, command.routeAllowanceM);

@@ -12,6 +12,7 @@ import { FORMAT_ID } from './types.ts';
 import { safeJsonParse } from './safeJson.ts';
 import { migrate } from './migrations.ts';
 import { measureOnPlan } from './planLengths.ts';
+import { runCounts, runKey } from './runs.ts';
 import type * as z from 'zod';
 import { alternativeSchema, alternativesListSchema, documentSchema, MAX_ELEMENTS } from './schema.ts';
 import { describeElement, issueMessage, valueAt } from './issueText.ts';
@@ -219,6 +220,17 @@ function softChecks(doc: ProjectDocument): string[] {
     if (m && Math.abs(m.lengthM - c.lengthM) > 0.05)
       warnings.push(
         `cable ${c.id}: lengthM is ${c.lengthM} m but its route on the site plan measures ${m.lengthM} m (${m.distanceM} m + ${m.allowanceM} m allowance); the file's length is used until the cable is edited or an end moved on the plan`,
+      );
+  }
+  // A grouped count that no longer matches its shared run (a hand edit): read as written, said.
+  const counts = runCounts(doc.cables);
+  for (const c of doc.cables) {
+    const inst = c.installation;
+    if (inst?.run === undefined) continue;
+    const n = counts.get(runKey(inst.run)) ?? 1;
+    if (inst.groupedCircuits !== n)
+      warnings.push(
+        `cable ${c.id}: installation.groupedCircuits is ${inst.groupedCircuits} but run "${inst.run}" holds ${n} circuits; the file's count is used until a cable of the run is edited`,
       );
   }
   return warnings;

@@ -189,6 +189,13 @@ export const installationSchema = z.strictObject({
   groupedCircuits: z.number().int().min(1).max(1000),
   groupArrangement: z.enum(['bunched', 'singleLayer', 'tray']),
   insulationFactor: fraction(),
+  run: z
+    .string()
+    .trim()
+    .min(1)
+    .max(60)
+    .optional()
+    .describe('A shared containment run by name; cables in the same run are grouped together.'),
 });
 
 const cableBody = {

@@ -100,6 +100,7 @@ const KEY_ORDER: readonly string[] = [
   'groupedCircuits',
   'groupArrangement',
   'insulationFactor',
+  'run',
 ];
 const RANK = new Map(KEY_ORDER.map((k, i) => [k, i]));
 /** An alternative reads name first, then what it holds. */

@@ -216,6 +216,12 @@ export interface Installation {
   groupArrangement: 'bunched' | 'singleLayer' | 'tray';
   /** Thermal insulation factor Ci where a short length passes through insulation (1 = none). */
   insulationFactor: number;
+  /**
+   * A shared containment run (tray, trunking, duct, trench) by name. Every cable given the same
+   * run is grouped with the others in it: `groupedCircuits` is then the number of circuits in the
+   * run, counted by the editor (see runs.ts).
+   */
+  run?: string;
 }
 
 export interface Cable {

@@ -165,6 +165,7 @@ const CABLE_FIELDS: readonly FieldSpec[] = [
   ['installation.method', 'installation'],
   ['installation.ambientC', 'ambient', '°C'],
   ['installation.groupedCircuits', 'grouped circuits'],
+  ['installation.run', 'shared run'],
 ];
 
 const LOAD_FIELDS: readonly FieldSpec[] = [

@@ -132,7 +132,7 @@ export function cableCapacity(
           'Cg',
           group.factor,
           '',
-          `${group.source}${buried ? '' : `, ${inst.groupArrangement}`}, ${group.usedAt} circuit${group.usedAt === 1 ? '' : 's'}`,
+          `${group.source}${buried ? '' : `, ${inst.groupArrangement}`}, ${group.usedAt} circuit${group.usedAt === 1 ? '' : 's'}${cable.installation?.run !== undefined ? ` (installation.groupedCircuits: the circuits in run "${cable.installation.run}")` : ''}`,
         ],
         ['Ci', ci, '', 'installation.insulationFactor'],
         ...(n > 1 ? [['n', n, 'cables', 'cable.parallel'] as const] : []),

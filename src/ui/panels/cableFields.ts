@@ -223,11 +223,29 @@ export const CABLE_FIELDS: FieldGroup<Cable, P>[] = [
         { min: -30, max: 80 },
         'Of the air around the cable; for a buried cable, of the ground (its tables are at 20 °C, not 30 °C).',
       ),
-      installNumber('groupedCircuits', 'Circuits grouped (this one included)', '', {
-        min: 1,
-        max: 100,
-        integer: true,
-      }),
+      {
+        kind: 'text',
+        key: 'installation.run',
+        label: 'Shared run',
+        hint: 'The tray, trunking, duct or trench it shares, by name (e.g. Tray T1). Cables given the same run are grouped: the circuits grouped are counted from the run (shown with the run in the cable schedule). Leave empty to type the count.',
+        shown: (c) => c.installation !== undefined,
+        check: (v) => (v.trim().length > 60 ? 'A run name is at most 60 characters; shorten it.' : null),
+        get: (c) => c.installation?.run ?? '',
+        set: (c, v) => {
+          const { run: _old, ...rest } = { ...INSTALLATION_OFFER, ...c.installation };
+          const run = v.trim();
+          return { installation: run ? { ...rest, run } : rest };
+        },
+      },
+      {
+        ...installNumber('groupedCircuits', 'Circuits grouped (this one included)', '', {
+          min: 1,
+          max: 100,
+          integer: true,
+        }),
+        // In a shared run the count comes from the run.
+        shown: (c) => c.installation !== undefined && c.installation.run === undefined,
+      },
       {
         kind: 'choice',
         key: 'installation.groupArrangement',
