@@ -80,6 +80,9 @@ export function addPart(part: PartKind, at?: Position): void {
   // Loads hung off a board keep the board selected, so the next click hangs another one there;
   // a new board or junction becomes the place to hang the next parts from.
   if (out.ok) s.setSelection(feedFrom && node.kind === 'load' ? [feedFrom] : [node.id]);
+  // A part added below the selected board may land off screen: bring it into view, so every
+  // click is seen to do something.
+  if (out.ok && !at && !onPlan) canvas()?.reveal?.({ ...node.position, ...NODE_SIZE[node.kind] });
 }
 
 export function deleteSelection(): void {

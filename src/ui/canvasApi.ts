@@ -14,6 +14,8 @@ export interface CanvasApi {
   centreOn(position: Position): void;
   /** Canvas coordinates of the middle of what is on screen, where a clicked tray part lands. */
   viewCentre(): Position;
+  /** Brings a box of the drawing into view (same zoom) when it is not on screen already. */
+  reveal?(box: { x: number; y: number; width: number; height: number }): void;
   /**
    * Given only while the site plan is shown: the plan point in the middle of the view, where a
    * clicked tray part is placed on the plan, and the allowance the plan bar gives cables measured

@@ -507,3 +507,25 @@ test('site plan: a bend added to a route and dragged round an obstacle lengthens
   await expect(label.textContent()).resolves.toBe(`C28 · ${c28.lengthM.toFixed(1)} m`);
   expect(s.errors).toEqual([]);
 });
+
+test('parts clicked in the tray hang off the selected board and come into view', async () => {
+  const ui = new Panels(s.page);
+  await ui.start();
+  const page = s.page;
+  await page.getByRole('button', { name: 'New', exact: true }).click();
+  await page.locator('.react-flow__node').first().click();
+  await page.getByTestId('part-board').click();
+  for (let k = 0; k < 3; k++) await page.getByTestId('part-load:sockets').click();
+  await page.waitForTimeout(500);
+  const pane = (await page.locator('.react-flow').boundingBox())!;
+  const nodes = page.locator('.react-flow__node');
+  await expect(nodes.count()).resolves.toBe(5);
+  // The last one added is on screen, inside the canvas.
+  const last = (await nodes.nth(4).boundingBox())!;
+  expect(last.x).toBeGreaterThanOrEqual(pane.x);
+  expect(last.y).toBeGreaterThanOrEqual(pane.y);
+  expect(last.x + last.width).toBeLessThanOrEqual(pane.x + pane.width);
+  expect(last.y + last.height).toBeLessThanOrEqual(pane.y + pane.height);
+  await screenshot(page, 'tray-parts-in-view');
+  expect(s.errors).toEqual([]);
+});

@@ -95,6 +95,22 @@ function FlowView() {
         if (!r) return { x: 0, y: 0 };
         return flow.screenToFlowPosition({ x: r.left + r.width / 2, y: r.top + r.height / 2 });
       },
+      reveal: (box) => {
+        const el = document.querySelector('.react-flow');
+        const r = el?.getBoundingClientRect();
+        if (!r) return;
+        // Keep clear of the drawer and the panels that may cover the bottom of the canvas.
+        const drawer = document.querySelector('.dl-drawer')?.getBoundingClientRect();
+        const bottom = drawer && drawer.top > r.top ? drawer.top : r.bottom;
+        const a = flow.flowToScreenPosition({ x: box.x, y: box.y });
+        const b = flow.flowToScreenPosition({ x: box.x + box.width, y: box.y + box.height });
+        const inside = a.x >= r.left && a.y >= r.top && b.x <= r.right && b.y <= bottom - 40;
+        if (!inside)
+          void flow.setCenter(box.x + box.width / 2, box.y + box.height / 2, {
+            zoom: flow.getZoom(),
+            duration: 250,
+          });
+      },
     });
     return () => registerCanvas(null);
   }, [flow]);
