@@ -79,10 +79,10 @@ const METHOD_SHORT: Record<string, string> = {
 
 const DEVICE_SHORT: Record<string, string> = { mcb: 'MCB', rcbo: 'RCBO', fuseGG: 'gG fuse', mccb: 'MCCB' };
 
-function deviceShort(d: Device | undefined): string {
+function deviceShort(d: Device | undefined, withRcd = true): string {
   if (!d) return '–';
   const curve = d.curve && (d.type === 'mcb' || d.type === 'rcbo') ? ` ${d.curve}` : '';
-  return `${DEVICE_SHORT[d.type] ?? d.type}${curve} ${d.ratingA} A${d.rcd ? ` + RCD ${d.rcd.idnMa} mA` : ''}`;
+  return `${DEVICE_SHORT[d.type] ?? d.type}${curve} ${d.ratingA} A${withRcd && d.rcd ? ` + RCD ${d.rcd.idnMa} mA` : ''}`;
 }
 
 export function cableSchedule(doc: ProjectDocument, results: Results): Schedule {
@@ -315,7 +315,7 @@ export function testSchedule(doc: ProjectDocument, results: Results): Schedule {
     col('to', 'Circuit to', 'The load, or the board a sub-main feeds', false),
     col('board', 'From board', 'Where the circuit starts: its device is there', false),
     col('cables', 'Cables', 'The cables of the circuit, from the board (through junctions)', false),
-    col('device', 'Device', 'Protective device of the circuit, with its RCD', false),
+    col('device', 'Device', 'Protective device of the circuit (its RCD in the next columns)', false),
     col(
       'size',
       'Size mm²',
@@ -339,6 +339,13 @@ export function testSchedule(doc: ProjectDocument, results: Results): Schedule {
       'Largest Zs to accept when testing with conductors cold: 0.8 × the maximum Zs for the device (common practice, allowing for the rise in conductor temperature in service), ohms',
     ),
     col('pfc', 'Ipf kA', 'Expected largest prospective fault current at the circuit end, kA'),
+    col('rcd', 'RCD', 'Residual current device of the circuit: rated residual current IΔn and type', false),
+    col(
+      'rcdLimit',
+      'RCD max ms',
+      'Longest operating time to accept for a general (not time-delayed) RCD: 300 ms at IΔn; 40 ms at 5 IΔn (IEC 61008-1 and IEC 61009-1, general type; from memory: check against the standard)',
+      false,
+    ),
     onSite('r1r2Measured', 'R1+R2 meas.', 'Measured R1 + R2, ohms'),
     onSite('zsMeasured', 'Zs meas.', 'Measured earth fault loop impedance, ohms'),
     onSite('irMeasured', 'IR MΩ', 'Measured insulation resistance, megohms'),
@@ -384,7 +391,8 @@ export function testSchedule(doc: ProjectDocument, results: Results): Schedule {
           to: txt(n.name || n.id),
           board: txt(nameOf(nodes, first.from)),
           cables: txt(ids.join(' → ')),
-          device: txt(deviceShort(device ?? undefined)),
+          // The RCD has columns of its own on this sheet.
+          device: txt(deviceShort(device ?? undefined, false)),
           size: { sort: first.sizeMm2, text: sizes.join(' → ') },
           length: num(
             list.reduce((sum, c) => sum + c.lengthM, 0),
@@ -394,6 +402,8 @@ export function testSchedule(doc: ProjectDocument, results: Results): Schedule {
           zsCold: num(p?.zsColdOhm, 3),
           zsTest: num(p?.testZsMaxOhm, 3),
           pfc: num(p ? p.fault.maxA / 1000 : undefined, 2),
+          rcd: txt(device?.rcd ? `${device.rcd.idnMa} mA type ${device.rcd.type}` : '–'),
+          rcdLimit: txt(device?.rcd ? '300; 40 at 5 IΔn' : '–'),
           r1r2Measured: txt(''),
           zsMeasured: txt(''),
           irMeasured: txt(''),

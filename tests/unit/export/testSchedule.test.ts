@@ -70,6 +70,17 @@ describe('expected test values', () => {
     expect(l1.zsCold!.sort).toBe(results.loads.L1!.protection!.zsColdOhm);
   });
 
+  test('a circuit with an RCD gives its IΔn and the general-type time limits (IEC 61008-1, from memory)', () => {
+    expect(cells('L1')).toMatchObject({ rcd: '–', rcdLimit: '–' });
+    const withRcd = structuredClone(doc);
+    const c1 = withRcd.cables.find((c) => c.id === 'C1')!;
+    c1.device = { ...c1.device!, type: 'rcbo', rcd: { type: 'A', idnMa: 30 } };
+    const row = testSchedule(withRcd, solve(withRcd)).rows.find((r) => r.id === 'L1')!;
+    expect(row.cells.rcd!.text).toBe('30 mA type A');
+    expect(row.cells.rcdLimit!.text).toBe('300; 40 at 5 IΔn');
+    expect(row.cells.device!.text).toBe('RCBO B 20 A');
+  });
+
   test('the columns for measured values are empty and marked to be filled in on site', () => {
     const site = schedule.columns.filter((c) => c.onSite).map((c) => c.id);
     expect(site).toEqual(['r1r2Measured', 'zsMeasured', 'irMeasured', 'rcdMeasured', 'polarity']);
