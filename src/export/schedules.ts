@@ -215,7 +215,9 @@ export function loadSchedule(doc: ProjectDocument, results: Results): Schedule {
         status: r?.status ?? null,
         cells: {
           name: txt(l.name || l.id),
-          kind: txt(LOAD_KIND_LABELS[l.loadKind] ?? l.loadKind),
+          kind: txt(
+            `${LOAD_KIND_LABELS[l.loadKind] ?? l.loadKind}${l.distributed ? ', spread along its cable' : ''}`,
+          ),
           fedFrom: txt(nameOf(nodes, feeder?.from)),
           demand: { sort: l.demand.value, text: `${fmt(l.demand.value)} ${l.demand.unit}` },
           phase: txt(l.phases === 3 ? '3-phase' : l.phase),

@@ -148,6 +148,10 @@ export const loadSchema = z.strictObject({
   phases: phaseCount,
   phase,
   demandFactor: fraction().describe('Share of the connected demand taken as design demand, 0 to 1.'),
+  distributed: z
+    .boolean()
+    .optional()
+    .describe('Spread evenly along the cable that feeds it: its far-end drop is over half the length.'),
   motor: motorStartSchema.optional(),
 });
 

@@ -72,6 +72,7 @@ const KEY_ORDER: readonly string[] = [
   'unit',
   'powerFactor',
   'demandFactor',
+  'distributed',
   'motor',
   'startMultiple',
   'startPowerFactor',

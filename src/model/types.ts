@@ -158,6 +158,11 @@ export interface Load {
   phase: Phase;
   /** Share of the connected demand taken as design demand (0..1]. */
   demandFactor: number;
+  /**
+   * The load is spread evenly along the cable that feeds it (a row of luminaires, a run of socket
+   * outlets): the drop at the far end is that of the whole current over half the cable's length.
+   */
+  distributed?: boolean;
   motor?: MotorStart;
 }
 

@@ -142,6 +142,8 @@ export interface DropState {
   loadCategory: Uint8Array;
   /** 1 where a load has motor starting data (read here so protection need not read the loads again). */
   loadMotor: Uint8Array;
+  /** 1 where a load is spread evenly along the cable feeding it (that cable drops over half its length). */
+  loadSpread: Uint8Array;
   /** A cable's `phases` field: 1, 3, or 0 for anything else. */
   cablePhasesField: Uint8Array;
   /** Scratch for the passes: phases needed below a node, 1 where a three-phase load or cable is below. */
@@ -257,6 +259,7 @@ function layout(a: Slab, n: number, m: number, useDeviceRating: boolean) {
     loadDeclared: a.u8(n),
     loadCategory: a.u8(n),
     loadMotor: a.u8(n),
+    loadSpread: a.u8(n),
     cablePhasesField: a.u8(m),
     needBelow: a.u8(n),
     threeBelow: a.u8(n),

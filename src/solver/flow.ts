@@ -143,7 +143,9 @@ function segmentDrop(s: DropState, v: number, j: number, u: number, phasors: boo
   // Series impedance of one conductor of the whole segment, parallel cables combined (the segment
   // is solvable, so its row, length and parallel count are valid).
   const row = cableRow(s, j) as ConductorRow;
-  const lengthM = s.cableLengthM[j] as number;
+  // A load spread evenly along its cable: the drop at the far end is that of the whole current
+  // over half the length (the uniformly distributed load; common practice).
+  const lengthM = (s.cableLengthM[j] as number) * (s.loadSpread[v] ? 0.5 : 1);
   const p = s.cableParallel[j] as number;
   const scaleX = row.frequencyHz ? s.frequencyHz / row.frequencyHz : 1;
   const zr = (row.rOhmPerM * lengthM) / p;

@@ -121,6 +121,7 @@ export function readNode(s: DropState, i: number, el: Loose, kind: number): void
   const category = el.category;
   s.loadCategory[i] = category === 'other' ? 1 : category === 'lighting' ? 0 : 2;
   if (el.motor) s.loadMotor[i] = 1;
+  if (el.distributed === true) s.loadSpread[i] = 1;
   const demand = el.demand;
   const value = typeof demand === 'object' && demand !== null ? (demand as Loose).value : undefined;
   const unit = typeof demand === 'object' && demand !== null ? unitCode((demand as Loose).unit) : UNIT_BAD;

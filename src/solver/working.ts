@@ -178,6 +178,16 @@ function dropRecord(s: DropState, j: number, ib: number): Working {
       source: catalogueSource(s, j),
     },
   ];
+  // A load spread along the cable: the far-end drop is over half the length.
+  const spread = s.loadSpread[v] === 1;
+  const k = spread ? ' × k' : '';
+  if (spread)
+    inputs.push({
+      name: 'k',
+      value: 0.5,
+      unit: '',
+      source: `${field('load', s.nodeIds.at(v), 'distributed')}: the load is spread evenly along the cable, so the drop at its far end is that of the whole current over half the length (uniformly distributed load; common practice)`,
+    });
   const rating = deviceRatingA(s, j);
   if (rating > 0)
     inputs.push({
@@ -211,7 +221,7 @@ function dropRecord(s: DropState, j: number, ib: number): Working {
     return {
       key: 'drop',
       title: `Segment drop, single-phase loop on ${PHASE_NAMES[p]}`,
-      formula: 'Vd = 2 × I × L × (r cos φ + x sin φ); % = Vd / U0 × 100 (line and neutral: 2 conductors)',
+      formula: `Vd = 2 × I × L${k} × (r cos φ + x sin φ); % = Vd / U0 × 100 (line and neutral: 2 conductors)`,
       inputs,
       result: { value: proj, unit: `V = ${r4((proj / s.u0V) * 100)} % of U0` },
     };
@@ -221,8 +231,7 @@ function dropRecord(s: DropState, j: number, ib: number): Working {
     return {
       key: 'drop',
       title: 'Segment drop, balanced three-phase (√3 method, line to line)',
-      formula:
-        'Vd(L-L) = √3 × I × L × (r cos φ + x sin φ); % = Vd / ULL × 100 (equal to the per-phase drop as % of U0)',
+      formula: `Vd(L-L) = √3 × I × L${k} × (r cos φ + x sin φ); % = Vd / ULL × 100 (equal to the per-phase drop as % of U0)`,
       inputs: [
         ...inputs,
         { name: 'I', value: r4(ib * scale), unit: 'A', source: 'result: Ib of this cable' },
@@ -257,8 +266,7 @@ function dropRecord(s: DropState, j: number, ib: number): Working {
   return {
     key: 'drop',
     title: 'Segment drop, unbalanced three-phase, per phase with the neutral current',
-    formula:
-      'ΔV_p = (r + jx) × L × (I_p + I_N), I_N = I_L1 + I_L2 + I_L3; Vd_p = ΔV_p projected on the phase voltage direction (the r cos φ + x sin φ form); % of U0',
+    formula: `ΔV_p = (r + jx) × L${k} × (I_p + I_N), I_N = I_L1 + I_L2 + I_L3; Vd_p = ΔV_p projected on the phase voltage direction (the r cos φ + x sin φ form); % of U0`,
     inputs: [...inputs, ...per],
     result: { value: proj, unit: `V on ${PHASE_NAMES[p]} (worst) = ${r4((proj / s.u0V) * 100)} % of U0` },
     note: 'The neutral is taken as the same size and material as the phase conductors.',

@@ -73,6 +73,33 @@ describe('solver properties on random radial networks', () => {
     );
   });
 
+  it('a load spread along its cable halves that cable’s own drop and changes no other cable’s', () => {
+    // Uniformly distributed load: the far-end drop is the whole current over half the length
+    // (common practice). Its current is the same, so every other segment drops as before.
+    fc.assert(
+      fc.property(radialNetwork(), fc.nat(), (doc, pick) => {
+        const loads = doc.nodes.filter((n) => n.kind === 'load');
+        fc.pre(loads.length > 0);
+        const load = loads[pick % loads.length]!;
+        const before = solveDrop(doc);
+        const feed = doc.cables.find((c) => c.to === load.id);
+        fc.pre(feed !== undefined && before.cables[feed.id]?.solved !== false);
+        const spread: ProjectDocument = structuredClone(doc);
+        const target = spread.nodes.find((n) => n.id === load.id)!;
+        if (target.kind === 'load') target.distributed = true;
+        const after = solveDrop(spread);
+        for (const c of doc.cables) {
+          const a = before.cables[c.id];
+          const b = after.cables[c.id];
+          if (!a || !b || a.solved === false) continue;
+          const want = c.id === feed!.id ? a.dropV / 2 : a.dropV;
+          expect(b.dropV).toBeCloseTo(want, 9);
+        }
+      }),
+      runs,
+    );
+  });
+
   it('never throws on mangled documents, and reports them', () => {
     const junk = fc.constantFrom<unknown>(
       NaN,

@@ -6,6 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { solveDrop } from '../../src/solver/solveDrop.ts';
+import { solve } from '../../src/solver/solve.ts';
 import { parseCatalogueCsv } from '../../src/catalogue/loadCatalogue.ts';
 import type { CatalogueSet } from '../../src/catalogue/catalogueSet.ts';
 import { network } from '../fixtures/build.ts';
@@ -169,5 +170,35 @@ describe('distributor example: 35 mm² PVC/SWA, 3-phase 100 A over 150 m at 1.1 
   it('the built-in data agree within the table’s 2 %', () => {
     const v = solveDrop(build()).cables.C?.dropV ?? NaN;
     expect(Math.abs(v - 16.5) / 16.5).toBeLessThan(0.02);
+  });
+});
+
+describe('VD-3: a load spread evenly along its cable (uniformly distributed load)', () => {
+  // The far-end drop of a load spread evenly along a run is that of the whole current over half
+  // the length (common practice: ∫ I (1 − x/L) dx from 0 to L = I L / 2). With the 18 mV/A/m of
+  // vector D: 20 A spread over 25 m drops 18 × 20 × 25 / 2 / 1000 = 4.50 V = 1.957 % of 230 V.
+  const set = dataSet('Cu,thermoplastic70,flatTwinEarth,2.5,18,,,,,');
+  const build = (distributed: boolean) =>
+    network({ dataSet: 'vectors' })
+      .supply('S', { phases: 1, pfcKa: 6 })
+      .load('L', { amps: 20, category: 'lighting', loadKind: 'lighting', distributed })
+      .cable('C', 'S', 'L', { lengthM: 25, sizeMm2: 2.5, construction: 'flatTwinEarth' })
+      .doc();
+
+  it('drops 4.50 V, half the lumped 9.00 V; the lighting load then meets its 3 % limit', () => {
+    const r = solveDrop(build(true), set);
+    expect(r.cables.C?.dropV).toBeCloseTo(4.5, 6);
+    expect(r.loads.L?.cumulativePct.value).toBeCloseTo(1.957, 3);
+    expect(solveDrop(build(false), set).loads.L?.status).toBe('over');
+    expect(r.loads.L?.status).toBe('within');
+    const w = r.cables.C!.working.find((x) => x.key === 'drop')!;
+    expect(w.formula).toContain('× L × k ×');
+    expect(w.inputs.find((i) => i.name === 'k')?.value).toBe(0.5);
+  });
+
+  it('leaves the loop impedance at the far end: the whole length still counts for Zs', () => {
+    const spread = solve(build(true), set).loads.L!.protection!.zsOhm;
+    const lumped = solve(build(false), set).loads.L!.protection!.zsOhm;
+    expect(spread).toBe(lumped);
   });
 });

@@ -36,6 +36,7 @@ const FIELDS: Record<NodeElement['kind'], readonly string[]> = {
     'phases',
     'phase',
     'demandFactor',
+    'distributed',
     'motor',
   ],
 };

@@ -177,6 +177,7 @@ const LOAD_FIELDS: readonly FieldSpec[] = [
   ['category', 'limit category'],
   ['loadKind', 'kind'],
   ['demandFactor', 'demand factor'],
+  ['distributed', 'spread along its cable'],
   ['motor.startMultiple', 'starting multiple'],
 ];
 

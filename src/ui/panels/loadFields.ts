@@ -94,6 +94,14 @@ export const LOAD_FIELDS: FieldGroup<Load, Partial<Load>>[] = [
         get: (l) => l.phase,
         set: (_l, v) => ({ phase: v as Phase }),
       },
+      {
+        kind: 'toggle',
+        key: 'distributed',
+        label: 'Spread along its cable',
+        hint: 'A row of luminaires or a run of socket outlets along the cable feeding it: the drop at the far end is that of the whole current over half the cable’s length. Loop impedance is still taken at the far end.',
+        get: (l) => l.distributed === true,
+        set: (_l, on) => ({ distributed: on ? true : undefined }),
+      },
     ],
   },
   {
