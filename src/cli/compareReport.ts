@@ -79,7 +79,7 @@ function designLine(letter: string, d: DesignInfo): string {
 export function textTable(t: TextTable): string {
   const lines = t.title ? [t.title.toUpperCase()] : [];
   if (t.note) lines.push(wrap(t.note, WIDTH, '  ', '  '));
-  lines.push(t.rows.length === 0 ? `  ${t.empty}` : table(t.headers, t.rows, t.align));
+  lines.push(t.rows.length === 0 ? `  ${t.empty}` : table(t.headers, t.rows, t.align, '  ', WIDTH));
   return lines.join('\n');
 }
 
