@@ -109,6 +109,14 @@ export const boardSchema = z.strictObject({
   position: positionSchema,
   plan: planPointSchema.optional(),
   diversity: fraction().describe("Diversity applied to the board's outgoing demand, 0 to 1 (1 = none)."),
+  spareCapacityPct: z
+    .number()
+    .min(0)
+    .max(200)
+    .optional()
+    .describe(
+      "Allowance for loads to come, % of the board's demand; the cables feeding it carry the demand with it.",
+    ),
 });
 
 export const junctionSchema = z.strictObject({

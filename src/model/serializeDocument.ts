@@ -65,6 +65,7 @@ const KEY_ORDER: readonly string[] = [
   'xOverR',
   'raOhm',
   'diversity',
+  'spareCapacityPct',
   'loadKind',
   'category',
   'demand',

@@ -96,6 +96,11 @@ export interface Board {
   plan?: PlanPoint;
   /** Diversity applied to the board's outgoing demand (1 = none). */
   diversity: number;
+  /**
+   * Allowance for loads still to come, % of the board's demand (after diversity): the cables
+   * feeding the board carry the demand × (1 + allowance / 100). None when absent.
+   */
+  spareCapacityPct?: number;
 }
 
 /** Joins cable segments, for example where a run changes size or tees off. */

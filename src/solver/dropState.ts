@@ -80,7 +80,7 @@ export interface DropState {
   loadValid: Uint8Array;
   /** Phases a load draws from (7 for a three-phase load), 0 for non-loads. */
   loadMask: Uint8Array;
-  /** Effective diversity of a board (1 elsewhere or when invalid). */
+  /** A board's demand factor: its diversity × (1 + spare capacity allowance) (1 elsewhere or when invalid). */
   diversity: Float64Array;
 
   /** Demand current phasor flowing into each node, per phase. */

@@ -28,6 +28,7 @@ export const FINDING_CODES = [
   'badPowerFactor',
   'badDemandFactor',
   'badDiversity',
+  'badSpareCapacity',
   'badCategory',
   'badVoltage',
   'voltageMismatch',

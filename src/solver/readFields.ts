@@ -110,7 +110,11 @@ export class RowMemo {
 export function readNode(s: DropState, i: number, el: Loose, kind: number): void {
   if (kind === KIND_BOARD) {
     const d = el.diversity;
-    if (typeof d === 'number' && d > 0 && d <= 1) s.diversity[i] = d;
+    const spare = el.spareCapacityPct;
+    const okSpare = spare === undefined || (typeof spare === 'number' && spare >= 0 && spare <= 200);
+    // The board's demand factor: its diversity, times its allowance for loads to come.
+    if (typeof d === 'number' && d > 0 && d <= 1 && okSpare)
+      s.diversity[i] = d * (1 + (typeof spare === 'number' ? spare : 0) / 100);
     else s.nodeCheck[i] = 1;
     return;
   }

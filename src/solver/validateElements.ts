@@ -104,12 +104,24 @@ export function validateNodes(s: DropState): void {
     const el = s.nodes[i] as unknown as Loose;
     const id = s.nodeIds.at(i);
     if (s.nodeKind[i] === KIND_BOARD) {
-      findings.push({
-        code: 'badDiversity',
-        severity: 'error',
-        elementId: id,
-        message: `${nodeLabel(s, i)}: diversity must be a number above 0 and at most 1, got ${shown(el.diversity)}; 1 (no diversity) is used until it is fixed.`,
-      });
+      const d = el.diversity;
+      const spare = el.spareCapacityPct;
+      if (!(typeof d === 'number' && d > 0 && d <= 1))
+        findings.push({
+          code: 'badDiversity',
+          severity: 'error',
+          elementId: id,
+          message: `${nodeLabel(s, i)}: diversity must be a number above 0 and at most 1, got ${shown(d)}; 1 (no diversity) is used until it is fixed.`,
+        });
+      else
+        findings.push({
+          code: 'badSpareCapacity',
+          severity: 'error',
+          elementId: id,
+          message: `${nodeLabel(s, i)}: spareCapacityPct must be a percentage from 0 to 200, got ${shown(spare)}; no allowance (and the diversity alone) is used until it is fixed.`,
+        });
+      // Diversity alone where only the allowance is bad.
+      if (typeof d === 'number' && d > 0 && d <= 1) s.diversity[i] = d;
       continue;
     }
     const demand = el.demand as Loose | undefined;

@@ -58,19 +58,29 @@ export function cableWorking(s: DropState, j: number): Working[] {
       source: `result: demand flowing into ${toId}`,
     });
   }
-  if (s.nodeKind[v] === KIND_BOARD)
+  if (s.nodeKind[v] === KIND_BOARD) {
+    const board = s.nodes[v] as unknown as { diversity?: unknown; spareCapacityPct?: unknown };
+    const spare = typeof board.spareCapacityPct === 'number' ? board.spareCapacityPct : 0;
     currentInputs.push({
       name: 'diversity',
-      value: s.diversity[v] as number,
+      value: spare > 0 ? (s.diversity[v] as number) / (1 + spare / 100) : (s.diversity[v] as number),
       unit: '',
       source: field('board', toId, 'diversity'),
     });
+    if (spare > 0)
+      currentInputs.push({
+        name: 'spare',
+        value: spare,
+        unit: '%',
+        source: `${field('board', toId, 'spareCapacityPct')}: allowance for loads to come, × (1 + spare / 100)`,
+      });
+  }
   const ib = cableIbA(s, j);
   out.push({
     key: 'ib',
     title: 'Design current Ib',
     formula:
-      'I_p = Σ demand phasors of the loads below on phase p (each × its demand factor, × board diversity); Ib = max over phases |I_p|',
+      'I_p = Σ demand phasors of the loads below on phase p (each × its demand factor, × board diversity, × (1 + spare capacity allowance) of each board passed); Ib = max over phases |I_p|',
     inputs: currentInputs,
     result: { value: ib, unit: 'A' },
   });

@@ -25,7 +25,7 @@ const FIELDS: Record<NodeElement['kind'], readonly string[]> = {
     'transformer',
     'raOhm',
   ],
-  board: [...COMMON, 'diversity'],
+  board: [...COMMON, 'diversity', 'spareCapacityPct'],
   junction: COMMON,
   load: [
     ...COMMON,

@@ -192,7 +192,10 @@ const NODE_FIELDS: Readonly<Record<string, readonly FieldSpec[]>> = {
     ['transformer.kva', 'transformer', 'kVA'],
     ['raOhm', 'RA', 'Ω'],
   ],
-  board: [['diversity', 'diversity']],
+  board: [
+    ['diversity', 'diversity'],
+    ['spareCapacityPct', 'spare capacity allowance', '%'],
+  ],
   junction: [],
 };
 

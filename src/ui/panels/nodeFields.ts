@@ -139,6 +139,16 @@ export const BOARD_FIELDS: Groups<Board> = [
         get: (b) => b.diversity,
         set: (_b, diversity) => ({ diversity }),
       },
+      {
+        kind: 'number',
+        key: 'spareCapacityPct',
+        label: 'Spare capacity allowance',
+        unit: '%',
+        rule: { min: 0, max: 200 },
+        hint: 'For loads still to come: the cables feeding this board are designed for its demand plus this share (0 for none).',
+        get: (b) => b.spareCapacityPct ?? 0,
+        set: (_b, pct) => ({ spareCapacityPct: pct > 0 ? pct : undefined }),
+      },
     ],
   },
 ];
