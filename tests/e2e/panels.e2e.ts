@@ -9,6 +9,20 @@ import { parseDocument } from '../../src/model/parseDocument.ts';
 import { solve } from '../../src/solver/solve.ts';
 import type { ProjectDocument } from '../../src/model/types.ts';
 
+/**
+ * A cable measured on the plan has, as its length, its route's legs (each |Δx| + |Δy|, through
+ * any bends) plus its allowance, rounded up to 0.1 m: worked out here on its own, not by the app's code.
+ */
+function expectMeasuredOnPlan(doc: ProjectDocument, cable: ProjectDocument['cables'][number]): void {
+  const at = new Map(doc.nodes.map((n) => [n.id, n.plan]));
+  const points = [at.get(cable.from)!, ...(cable.route!.via ?? []), at.get(cable.to)!];
+  let d = cable.route!.allowanceM;
+  for (let k = 1; k < points.length; k++)
+    d += Math.abs(points[k]!.xM - points[k - 1]!.xM) + Math.abs(points[k]!.yM - points[k - 1]!.yM);
+  expect(cable.lengthM).toBeGreaterThanOrEqual(d - 1e-9);
+  expect(cable.lengthM).toBeLessThan(d + 0.1 + 1e-9);
+}
+
 function demo(): ProjectDocument {
   const parsed = parseDocument(readFileSync('public/demo-project.json', 'utf8'));
   if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
@@ -380,14 +394,7 @@ test('site plan: dragging a board re-measures its cables while it moves; the eng
   const parsed = parseDocument(text);
   if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
   const doc = parsed.doc;
-  const at = new Map(doc.nodes.map((n) => [n.id, n.plan]));
-  for (const c of doc.cables.filter((x) => x.route)) {
-    const a = at.get(c.from)!;
-    const b = at.get(c.to)!;
-    const d = Math.abs(a.xM - b.xM) + Math.abs(a.yM - b.yM) + c.route!.allowanceM;
-    expect(c.lengthM).toBeGreaterThanOrEqual(d - 1e-9);
-    expect(c.lengthM).toBeLessThan(d + 0.1 + 1e-9);
-  }
+  for (const c of doc.cables.filter((x) => x.route)) expectMeasuredOnPlan(doc, c);
   const c28 = doc.cables.find((c) => c.id === 'C28')!;
   await expect(label.textContent()).resolves.toBe(`C28 · ${c28.lengthM.toFixed(1)} m`);
   const l27 = solve(doc).loads.L27!.cumulativePct.value;
@@ -447,10 +454,7 @@ test('site plan: a part clicked in the tray lands on the plan, fed from the sele
   const fed = saved.cables.find((c) => c.to === node.id)!;
   expect(fed.from).toBe('DB4');
   expect(fed.route).toEqual({ allowanceM: 2 });
-  const db4 = saved.nodes.find((n) => n.id === 'DB4')!.plan!;
-  const d = Math.abs(db4.xM - node.plan!.xM) + Math.abs(db4.yM - node.plan!.yM) + 2;
-  expect(fed.lengthM).toBeGreaterThanOrEqual(d - 1e-9);
-  expect(fed.lengthM).toBeLessThan(d + 0.1 + 1e-9);
+  expectMeasuredOnPlan(saved, fed);
   // One undo step takes both away.
   await page.getByRole('button', { name: 'Undo' }).click();
   await expect(page.getByTestId(`plan-marker-${node.id}`).count()).resolves.toBe(0);
@@ -488,13 +492,7 @@ test('site plan: a bend added to a route and dragged round an obstacle lengthens
   if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
   const c28 = parsed.doc.cables.find((c) => c.id === 'C28')!;
   expect(c28.route!.via).toHaveLength(1);
-  const at = new Map(parsed.doc.nodes.map((n) => [n.id, n.plan]));
-  const points = [at.get(c28.from)!, ...c28.route!.via!, at.get(c28.to)!];
-  let d = c28.route!.allowanceM;
-  for (let k = 1; k < points.length; k++)
-    d += Math.abs(points[k]!.xM - points[k - 1]!.xM) + Math.abs(points[k]!.yM - points[k - 1]!.yM);
-  expect(c28.lengthM).toBeGreaterThanOrEqual(d - 1e-9);
-  expect(c28.lengthM).toBeLessThan(d + 0.1 + 1e-9);
+  expectMeasuredOnPlan(parsed.doc, c28);
   await expect(label.textContent()).resolves.toBe(`C28 · ${c28.lengthM.toFixed(1)} m`);
   expect(solve(parsed.doc).cables.C28!.working.find((w) => w.key === 'drop')!.inputs[0]!.source).toMatch(
     /through its 1 bend/,
