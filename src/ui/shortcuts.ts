@@ -84,6 +84,14 @@ export const GESTURES: readonly { gesture: string; what: string }[] = [
     gesture: 'Site plan: click a name under “Not on the plan yet”',
     what: 'Put that element in the middle of the view, to drag where it stands',
   },
+  {
+    gesture: 'Site plan: click a part in the tray',
+    what: 'Place it in the middle of the view; with a board selected, feed it from the board by a cable measured on the plan',
+  },
+  {
+    gesture: 'Site plan: double-click a measured route',
+    what: 'Add a bend there; drag the bend to take the cable round an obstacle, double-click it to take it away',
+  },
 ];
 
 export function shortcutText(id: ShortcutId): string {
