@@ -3,7 +3,7 @@
  * raw value (for sorting) and its display text. No figure is computed here beyond picking the
  * solver's own values and the document's inputs.
  */
-import type { Device, Id, NodeElement, ProjectDocument } from '../model/types.ts';
+import type { Cable, Device, Id, NodeElement, ProjectDocument } from '../model/types.ts';
 import type { Results, Status } from '../solver/results.ts';
 import type { Check, NodeProtection } from '../solver/protection/protectionResults.ts';
 import { fmt } from './format.ts';
@@ -85,6 +85,14 @@ function deviceShort(d: Device | undefined, withRcd = true): string {
   return `${DEVICE_SHORT[d.type] ?? d.type}${curve} ${d.ratingA} A${withRcd && d.rcd ? ` + RCD ${d.rcd.idnMa} mA` : ''}`;
 }
 
+/**
+ * Line conductor / cpc, mm², with the parallel count. An SWA cable's "cpc" is its armour, whose
+ * cross-section is much larger than the cores': say so, or "4 / 35" reads as a 35 mm² cpc.
+ */
+function sizeText(c: Cable): string {
+  return `${c.parallel > 1 ? `${c.parallel}× ` : ''}${c.sizeMm2} / ${c.cpc.sizeMm2}${c.cpc.kind === 'armour' ? ' arm.' : ''}`;
+}
+
 export function cableSchedule(doc: ProjectDocument, results: Results): Schedule {
   const nodes = new Map(doc.nodes.map((n) => [n.id, n]));
   const columns = [
@@ -147,9 +155,7 @@ export function cableSchedule(doc: ProjectDocument, results: Results): Schedule 
         lengthFrom: txt(c.route ? `plan + ${c.route.allowanceM} m` : 'typed'),
         size: {
           sort: c.sizeMm2,
-          // An SWA cable's "cpc" is its armour, whose cross-section is much larger than the cores':
-          // say so, or "4 / 35" reads as a 35 mm² protective conductor.
-          text: `${c.parallel > 1 ? `${c.parallel}× ` : ''}${c.sizeMm2} / ${c.cpc.sizeMm2}${c.cpc.kind === 'armour' ? ' arm.' : ''}`,
+          text: sizeText(c),
         },
         phases: num(c.phases, 0),
         device: txt(
@@ -380,14 +386,7 @@ export function testSchedule(doc: ProjectDocument, results: Results): Schedule {
     const failed = [p?.checks, ...ids.map((id) => results.cables[id]?.protection?.checks)].some((cs) =>
       cs?.some((c) => c.pass === false),
     );
-    const sizes = [
-      ...new Set(
-        list.map(
-          (c) =>
-            `${c.parallel > 1 ? `${c.parallel}× ` : ''}${c.sizeMm2} / ${c.cpc.sizeMm2}${c.cpc.kind === 'armour' ? ' arm.' : ''}`,
-        ),
-      ),
-    ];
+    const sizes = [...new Set(list.map((c) => sizeText(c)))];
     rows.push({
       board: boardOrder.get(first.from) ?? -1,
       order,
